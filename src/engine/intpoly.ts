@@ -1,0 +1,271 @@
+/**
+ * Dense polynomials with integer (bigint) coefficients, low → high, as plain arrays. These are the
+ * working form of the polynomial algorithms (gcd, factoring, root isolation): clearing denominators
+ * once and staying in Z avoids a rational normalisation on every coefficient operation.
+ *
+ * Convention: a polynomial is a `bigint[]` without trailing zeros; the zero polynomial is `[]`.
+ */
+import { gcdInt as gcdInteger } from './rational';
+
+/** An integer polynomial, coefficients low → high, no trailing zeros. */
+export type IntPoly = bigint[];
+
+/** Drops trailing zero coefficients (in place) and returns the array. */
+export function trimInt(a: IntPoly): IntPoly {
+  let n = a.length;
+  while (n > 0 && a[n - 1] === 0n) n--;
+  a.length = n;
+  return a;
+}
+
+/** Degree, −1 for the zero polynomial. */
+export function degInt(a: IntPoly): number {
+  return a.length - 1;
+}
+
+/** a + b. */
+export function addInt(a: IntPoly, b: IntPoly): IntPoly {
+  const n = Math.max(a.length, b.length);
+  const out: IntPoly = new Array(n);
+  for (let i = 0; i < n; i++) out[i] = (a[i] ?? 0n) + (b[i] ?? 0n);
+  return trimInt(out);
+}
+
+/** a − b. */
+export function subInt(a: IntPoly, b: IntPoly): IntPoly {
+  const n = Math.max(a.length, b.length);
+  const out: IntPoly = new Array(n);
+  for (let i = 0; i < n; i++) out[i] = (a[i] ?? 0n) - (b[i] ?? 0n);
+  return trimInt(out);
+}
+
+/** a · b (schoolbook; the degrees here are small enough that Karatsuba does not pay). */
+export function mulInt(a: IntPoly, b: IntPoly): IntPoly {
+  if (a.length === 0 || b.length === 0) return [];
+  const out: IntPoly = new Array(a.length + b.length - 1).fill(0n);
+  for (let i = 0; i < a.length; i++) {
+    const ai = a[i];
+    if (ai === 0n) continue;
+    for (let j = 0; j < b.length; j++) out[i + j] += ai * b[j];
+  }
+  return out;
+}
+
+/** c · a for an integer c. */
+export function scaleInt(a: IntPoly, c: bigint): IntPoly {
+  if (c === 0n) return [];
+  return a.map((x) => x * c);
+}
+
+/** Non-negative gcd of the coefficients (0 for the zero polynomial). */
+export function contentInt(a: IntPoly): bigint {
+  let g = 0n;
+  for (const c of a) {
+    g = gcdInteger(g, c);
+    if (g === 1n) return 1n;
+  }
+  return g;
+}
+
+/** The primitive part with positive leading coefficient. */
+export function primitiveInt(a: IntPoly): IntPoly {
+  if (a.length === 0) return [];
+  let g = contentInt(a);
+  if (a[a.length - 1] < 0n) g = -g;
+  return g === 1n ? a.slice() : a.map((x) => x / g);
+}
+
+/** Value at an integer point (Horner). */
+export function evalInt(a: IntPoly, x: bigint): bigint {
+  let acc = 0n;
+  for (let i = a.length - 1; i >= 0; i--) acc = acc * x + a[i];
+  return acc;
+}
+
+/** Sign of a(num/den) for den > 0, exactly, without forming the rational (homogenised Horner). */
+export function signAtRational(a: IntPoly, num: bigint, den: bigint): -1 | 0 | 1 {
+  let acc = 0n;
+  let dpow = 1n;
+  for (let i = a.length - 1; i >= 0; i--) {
+    acc = acc * num + a[i] * dpow;
+    dpow *= den;
+  }
+  // acc = den^(n) · a(num/den) up to the positive factor den^k; its sign is the answer.
+  return acc === 0n ? 0 : acc > 0n ? 1 : -1;
+}
+
+/** Formal derivative. */
+export function derivInt(a: IntPoly): IntPoly {
+  const out: IntPoly = [];
+  for (let i = 1; i < a.length; i++) out.push(a[i] * BigInt(i));
+  return trimInt(out);
+}
+
+/**
+ * Exact quotient a / b over Z, or undefined when b does not divide a in Z[x]. Used by factor
+ * recombination, where most trial divisions fail early on a non-integral coefficient.
+ */
+export function divExactInt(a: IntPoly, b: IntPoly): IntPoly | undefined {
+  if (b.length === 0) throw new RangeError('division by the zero polynomial');
+  if (a.length < b.length) return a.length === 0 ? [] : undefined;
+  const r = a.slice();
+  const lb = b[b.length - 1];
+  const q: IntPoly = new Array(a.length - b.length + 1).fill(0n);
+  for (let k = a.length - b.length; k >= 0; k--) {
+    const top = r[k + b.length - 1];
+    if (top === 0n) continue;
+    if (top % lb !== 0n) return undefined;
+    const c = top / lb;
+    q[k] = c;
+    for (let j = 0; j < b.length; j++) r[k + j] -= c * b[j];
+  }
+  for (let i = 0; i < b.length - 1; i++) if (r[i] !== 0n) return undefined;
+  return trimInt(q);
+}
+
+/**
+ * Pseudo-remainder: lc(b)^(deg a − deg b + 1) · a mod b, computed in Z[x]. The building block of
+ * the primitive remainder sequence below.
+ */
+export function pseudoRemInt(a: IntPoly, b: IntPoly): IntPoly {
+  const r = a.slice();
+  const lb = b[b.length - 1];
+  const db = b.length - 1;
+  while (r.length >= b.length && r.length > 0) {
+    const k = r.length - b.length;
+    const top = r[r.length - 1];
+    for (let i = 0; i < r.length; i++) r[i] *= lb;
+    for (let j = 0; j <= db; j++) r[k + j] -= top * b[j];
+    trimInt(r);
+  }
+  return r;
+}
+
+/** Small primes below 2^25 used for a quick coprimality test before the exact gcd. */
+const GCD_TEST_PRIMES = [33554393, 33554383, 33554371];
+
+function reduceModP(a: IntPoly, p: number): number[] {
+  const P = BigInt(p);
+  const out = a.map((c) => {
+    const r = Number(c % P);
+    return r < 0 ? r + p : r;
+  });
+  let n = out.length;
+  while (n > 0 && out[n - 1] === 0) n--;
+  out.length = n;
+  return out;
+}
+
+function mulModN(a: number, b: number, p: number): number {
+  // a, b < 2^25, so a·b < 2^50 is exact in a double.
+  return (a * b) % p;
+}
+
+function invModN(a: number, p: number): number {
+  let [r0, r1, s0, s1] = [a, p, 1, 0];
+  while (r1 !== 0) {
+    const q = Math.floor(r0 / r1);
+    [r0, r1] = [r1, r0 - q * r1];
+    [s0, s1] = [s1, s0 - q * s1];
+  }
+  return ((s0 % p) + p) % p;
+}
+
+/** Degree of gcd(a, b) modulo p (an upper bound for the degree over Q when p ∤ lc). */
+function gcdDegreeModP(a: IntPoly, b: IntPoly, p: number): number {
+  let x = reduceModP(a, p);
+  let y = reduceModP(b, p);
+  while (y.length > 0) {
+    const inv = invModN(y[y.length - 1], p);
+    while (x.length >= y.length) {
+      const c = mulModN(x[x.length - 1], inv, p);
+      const k = x.length - y.length;
+      for (let j = 0; j < y.length; j++) x[k + j] = (x[k + j] - mulModN(c, y[j], p) + p) % p;
+      let n = x.length;
+      while (n > 0 && x[n - 1] === 0) n--;
+      x.length = n;
+    }
+    [x, y] = [y, x];
+  }
+  return x.length - 1;
+}
+
+/**
+ * gcd over Z: primitive, positive leading coefficient. A coprimality test modulo a prime first
+ * (the common case — a square-free characteristic polynomial against its derivative — then costs
+ * one cheap remainder sequence); otherwise the primitive remainder sequence, which keeps
+ * coefficients at the size of the true gcd (von zur Gathen & Gerhard, Modern Computer Algebra,
+ * §6.12).
+ */
+export function gcdIntPoly(a: IntPoly, b: IntPoly): IntPoly {
+  if (a.length === 0) return primitiveInt(b);
+  if (b.length === 0) return primitiveInt(a);
+  if (a.length === 1 || b.length === 1) return [1n];
+  for (const p of GCD_TEST_PRIMES) {
+    const P = BigInt(p);
+    if (a[a.length - 1] % P === 0n || b[b.length - 1] % P === 0n) continue;
+    if (gcdDegreeModP(a, b, p) === 0) return [1n];
+    break;
+  }
+  let x = primitiveInt(a);
+  let y = primitiveInt(b);
+  if (x.length < y.length) [x, y] = [y, x];
+  while (y.length > 0) {
+    const r = pseudoRemInt(x, y);
+    x = y;
+    y = r.length === 0 ? [] : primitiveInt(r);
+  }
+  return primitiveInt(x);
+}
+
+/** a(x + 1) by the O(n²) Taylor shift (the step of Descartes-rule root isolation). */
+export function taylorShiftOne(a: IntPoly): IntPoly {
+  const c = a.slice();
+  const n = c.length - 1;
+  for (let i = 0; i < n; i++) for (let j = n - 1; j >= i; j--) c[j] += c[j + 1];
+  return c;
+}
+
+/** 2^n · a(x / 2) for n = deg a: halves the variable while staying integral. */
+export function halveVariable(a: IntPoly): IntPoly {
+  const n = a.length - 1;
+  return a.map((c, i) => c << BigInt(n - i));
+}
+
+/** x^n · a(1 / x): the reversed coefficient list. */
+export function reverseInt(a: IntPoly): IntPoly {
+  return trimInt(a.slice().reverse());
+}
+
+/** Number of sign changes in the coefficient sequence (zeros skipped). */
+export function signVariations(a: IntPoly): number {
+  let count = 0;
+  let last = 0;
+  for (const c of a) {
+    if (c === 0n) continue;
+    const s = c > 0n ? 1 : -1;
+    if (last !== 0 && s !== last) count++;
+    last = s;
+  }
+  return count;
+}
+
+/** Bit length of |n| (0 for 0). */
+export function bitLength(n: bigint): number {
+  if (n < 0n) n = -n;
+  return n === 0n ? 0 : n.toString(2).length;
+}
+
+/** ⌈√n⌉ for n ≥ 0 by Newton's method on bigints. */
+export function ceilSqrt(n: bigint): bigint {
+  if (n < 0n) throw new RangeError('square root of a negative number');
+  if (n < 2n) return n;
+  let x = 1n << BigInt(Math.ceil(bitLength(n) / 2));
+  for (;;) {
+    const y = (x + n / x) >> 1n;
+    if (y >= x) break;
+    x = y;
+  }
+  // x = ⌊√n⌋ now.
+  return x * x === n ? x : x + 1n;
+}
