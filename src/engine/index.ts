@@ -4,3 +4,8 @@ export * from './field';
 export * from './rational';
 export * from './errors';
 export * from './factor';
+export * from './matrix';
+export * from './matrix-domains';
+export * from './matrix-elimination';
+export * from './charpoly';
+export * from './spectrum';

@@ -18,6 +18,9 @@ import { Matrix } from './matrix';
 import { ZZ, clearDenominators, domainLevel, hasExactDivision, isField } from './matrix-domains';
 import { QQ, Rational } from './rational';
 
+/** The element type elimination results live in: integers are promoted to rationals. */
+export type FieldElementOf<T> = T extends bigint ? Rational : T;
+
 /** A mutable row-major working copy. */
 interface Work<T> {
   a: T[];
@@ -169,10 +172,10 @@ export function rank(m: Matrix<unknown>, budget: Budget = Budget.unlimited()): n
 }
 
 /** The reduced row echelon form over a field (Z promoted to Q) and its pivot columns (zero-based). */
-export function rref<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): { rref: Matrix<T>; pivots: number[] } {
-  const fm = asFieldMatrix(m) as Matrix<T>;
+export function rref<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): { rref: Matrix<FieldElementOf<T>>; pivots: number[] } {
+  const fm = asFieldMatrix(m) as Matrix<FieldElementOf<T>>;
   const f = requireField(fm, 'the reduced row echelon form');
-  const work: Work<T> = { a: fm.entries.slice(), rows: fm.rows, cols: fm.cols };
+  const work: Work<FieldElementOf<T>> = { a: fm.entries.slice(), rows: fm.rows, cols: fm.cols };
   const { pivots } = gaussJordan(f, work, budget);
   return { rref: Matrix.fromEntries(f, fm.rows, fm.cols, work.a), pivots };
 }
@@ -181,14 +184,14 @@ export function rref<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): { rr
  * A basis of the right nullspace {v : m v = 0} over the field of m (Z promoted to Q), one column
  * vector per free column of the reduced row echelon form, with a 1 in that free position.
  */
-export function nullspace<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): Matrix<T>[] {
+export function nullspace<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): Matrix<FieldElementOf<T>>[] {
   const { rref: r, pivots } = rref(m, budget);
   const f = r.domain;
   const pivotSet = new Set(pivots);
-  const basis: Matrix<T>[] = [];
+  const basis: Matrix<FieldElementOf<T>>[] = [];
   for (let free = 0; free < r.cols; free++) {
     if (pivotSet.has(free)) continue;
-    const v: T[] = new Array(r.cols).fill(f.zero);
+    const v: FieldElementOf<T>[] = new Array(r.cols).fill(f.zero);
     v[free] = f.one;
     pivots.forEach((pc, row) => {
       v[pc] = f.neg(r.get(row, free));
@@ -199,12 +202,12 @@ export function nullspace<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()):
 }
 
 /** The inverse by Gauss–Jordan over the field of m (Z promoted to Q); SingularError if singular. */
-export function inverse<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): Matrix<T> {
+export function inverse<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): Matrix<FieldElementOf<T>> {
   const n = m.requireSquare();
-  const fm = asFieldMatrix(m) as Matrix<T>;
+  const fm = asFieldMatrix(m) as Matrix<FieldElementOf<T>>;
   const f = requireField(fm, 'the inverse');
   const cols = 2 * n;
-  const a: T[] = new Array(n * cols);
+  const a: FieldElementOf<T>[] = new Array(n * cols);
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < n; j++) {
       a[i * cols + j] = fm.entries[i * n + j];
@@ -216,10 +219,10 @@ export function inverse<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): M
   return Matrix.build(f, n, n, (i, j) => a[i * cols + n + j]);
 }
 
-/** m^k for any integer k; negative k uses the inverse (SingularError if m is singular). */
-export function matrixPower<T>(m: Matrix<T>, k: number, budget: Budget = Budget.unlimited()): Matrix<T> {
+/** m^k for any integer k over the field of m (Z promoted to Q); negative k uses the inverse. */
+export function matrixPower<T>(m: Matrix<T>, k: number, budget: Budget = Budget.unlimited()): Matrix<FieldElementOf<T>> {
   if (!Number.isInteger(k)) throw new ShapeError(`a matrix power needs an integer exponent, got ${k}`);
-  if (k >= 0) return m.pow(k, budget);
+  if (k >= 0) return asFieldMatrix(m.pow(k, budget)) as Matrix<FieldElementOf<T>>;
   return inverse(m, budget).pow(-k, budget);
 }
 

@@ -131,8 +131,8 @@ export class Matrix<T> {
     return a.entries.every((x, k) => d.equals(x, b.entries[k]));
   }
 
-  /** this + other. */
-  add(other: Matrix<unknown>): Matrix<T> {
+  /** this + other (same element type; mixed domains go through `unify` first). */
+  add(other: Matrix<T>): Matrix<T> {
     sameShape(this, other, 'add');
     const [a, b] = unify(this, other);
     const d = a.domain;
@@ -140,7 +140,7 @@ export class Matrix<T> {
   }
 
   /** this − other. */
-  sub(other: Matrix<unknown>): Matrix<T> {
+  sub(other: Matrix<T>): Matrix<T> {
     sameShape(this, other, 'subtract');
     const [a, b] = unify(this, other);
     const d = a.domain;
@@ -160,7 +160,7 @@ export class Matrix<T> {
   }
 
   /** The matrix product this · other (cols of this = rows of other). */
-  mul(other: Matrix<unknown>, budget?: Budget): Matrix<T> {
+  mul(other: Matrix<T>, budget?: Budget): Matrix<T> {
     if (this.cols !== other.rows) {
       throw new ShapeError(`cannot multiply a ${this.rows}×${this.cols} matrix by a ${other.rows}×${other.cols} matrix`);
     }
@@ -243,7 +243,8 @@ function multiplySameDomain<T>(a: Matrix<T>, b: Matrix<T>, budget?: Budget): Mat
 }
 
 /**
- * Both matrices over the smallest common domain of the tower Z < Q < Q(α) < Q(params).
+ * Both matrices over the smallest common domain of the tower Z < Q < Q(α) < Q(params), for
+ * arithmetic on operands of different domains: `const [x, y] = unify(a, b); x.mul(y)`.
  * Throws DomainError when there is none (e.g. Q(α) with parameters).
  */
 export function unify<A, B>(a: Matrix<A>, b: Matrix<B>): [Matrix<unknown>, Matrix<unknown>] {

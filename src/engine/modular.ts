@@ -33,7 +33,7 @@ export function modularPrime(k: number): number {
 }
 
 /** a^{-1} mod p for 0 < a < p (p prime), by the extended Euclidean algorithm on numbers. */
-export function inverseMod(a: number, p: number): number {
+export function inverseModPrime(a: number, p: number): number {
   let r0 = p;
   let r1 = a;
   let s0 = 0;
@@ -107,7 +107,7 @@ export function charpolyHessenbergModP(h: Float64Array, n: number, p: number): F
         h[i * n + m] = t;
       }
     }
-    const tinv = inverseMod(h[m * n + m - 1], p);
+    const tinv = inverseModPrime(h[m * n + m - 1], p);
     for (let r = m + 1; r < n; r++) {
       let u = h[r * n + m - 1];
       if (u === 0) continue;
@@ -196,7 +196,7 @@ export function determinantModP(a: Float64Array, n: number, p: number): number {
     }
     const pivot = a[c * n + c];
     det = (det * pivot) % p;
-    const pinvPivot = inverseMod(pivot, p);
+    const pinvPivot = inverseModPrime(pivot, p);
     for (let r = c + 1; r < n; r++) {
       let u = a[r * n + c];
       if (u === 0) continue;
@@ -257,7 +257,7 @@ export function reconstructCRT(residues: readonly Float64Array[], primesUsed: re
   for (let i = 1; i < k; i++) {
     let prod = 1;
     for (let j = 0; j < i; j++) prod = (prod * (primesUsed[j] % primesUsed[i])) % primesUsed[i];
-    prefixInverse.push(inverseMod(prod, primesUsed[i]));
+    prefixInverse.push(inverseModPrime(prod, primesUsed[i]));
   }
   let modulus = 1n;
   for (const p of primesUsed) modulus *= BigInt(p);

@@ -1,0 +1,99 @@
+// Spectra: every matrix of the shared benchmark set against its PARI/GP + SymPy oracle, the Rosser
+// matrix, and identities between charpoly, determinant, trace and the minimal polynomial.
+import { test } from 'node:test';
+import assert from 'node:assert/strict';
+import { Matrix } from '../../src/engine/matrix';
+import { ZZ } from '../../src/engine/matrix-domains';
+import { spectrum } from '../../src/engine/spectrum';
+import { determinant } from '../../src/engine/charpoly';
+import { Poly } from '../../src/engine/poly';
+import { QQ, Rational } from '../../src/engine/rational';
+import { BudgetError, DomainError } from '../../src/engine/errors';
+import { ROSSER, loadBenchMatrices, parseFactoredText, parsePolyText } from './matrix-fixtures';
+
+const intMatrix = (rows: number[][]) => Matrix.fromRows(ZZ, rows.map((r) => r.map((x) => BigInt(x))));
+const product = (pairs: [Poly, number][]) => pairs.reduce((acc, [f, e]) => acc.mul(f.pow(e)), Poly.one());
+
+for (const bench of loadBenchMatrices()) {
+  test(`bench ${bench.name}: charpoly, det, trace, factors, block sizes and minimal polynomial match the oracle`, () => {
+    // Oracle: ../shared/bench/matrices.json (PARI/GP 2.15.2 charpoly, matdet, factor,
+    // matfrobenius(A,1); cross-checked with SymPy 1.11.1).
+    const a = intMatrix(bench.matrix);
+    const s = spectrum(a);
+    const o = bench.oracle;
+    assert.deepEqual(s.charpoly.coeffs.map((c) => c.toString()).reverse(), o.charpoly_coeffs);
+    assert.equal(s.determinant.toString(), o.det);
+    assert.equal(String(determinant(a)), o.det);
+    assert.equal(s.trace.toString(), o.trace);
+    assert.equal(a.trace().toString(), o.trace);
+    const expected = parseFactoredText(o.charpoly_factored);
+    assert.equal(s.factors.length, expected.length);
+    for (const [f, e] of expected) {
+      const g = s.factors.find((x) => x.factor.equals(f));
+      assert.ok(g, `factor ${f.toString()} missing`);
+      assert.equal(g.algebraicMultiplicity, e);
+    }
+    // Invariant factors d_1 | d_2 | …, PARI lists the largest first: it is the minimal polynomial,
+    // and the exponents of f across the invariant factors are the Jordan block sizes of its roots.
+    const invariants = o.invariant_factors_factored.map(parseFactoredText);
+    assert.ok(s.minimalPolynomial.equals(product(invariants[0])));
+    for (const g of s.factors) {
+      const sizes = invariants
+        .map((inv) => inv.find(([f]) => f.equals(g.factor))?.[1] ?? 0)
+        .filter((e) => e > 0)
+        .sort((x, y) => y - x);
+      assert.deepEqual([...g.jordanBlockSizes], sizes, `block sizes of ${g.factor.toString()}`);
+      assert.equal(g.geometricMultiplicity, sizes.length);
+    }
+  });
+}
+
+test('Rosser matrix spectrum: 0, 1000 (twice, two blocks), 1020, 510 ± 100√26, ±10√10405', () => {
+  // Rosser, Lanczos, Hestenes & Karush (1951): the matrix is symmetric, so every eigenvalue is
+  // semisimple (geometric = algebraic multiplicity) and the minimal polynomial is square-free.
+  const s = spectrum(intMatrix(ROSSER));
+  const byFactor = new Map(s.factors.map((g) => [g.factor.toString(), g]));
+  assert.equal(byFactor.get(parsePolyText('x - 1000').toString())?.algebraicMultiplicity, 2);
+  assert.equal(byFactor.get(parsePolyText('x - 1000').toString())?.geometricMultiplicity, 2);
+  assert.ok(byFactor.has(parsePolyText('x').toString()));
+  assert.ok(byFactor.has(parsePolyText('x - 1020').toString()));
+  assert.ok(byFactor.has(parsePolyText('x^2 - 1020*x + 100').toString()));
+  assert.ok(byFactor.has(parsePolyText('x^2 - 1040500').toString()));
+  assert.equal(s.minimalPolynomial.degree(), 7);
+});
+
+test('a rational matrix with a 2-block and a quadratic pair: multiplicities and minimal polynomial', () => {
+  // diag(J_2(1/2), [[0,-1],[1,0]]) conjugated by a unimodular matrix: χ = (x − 1/2)² (x² + 1),
+  // μ = χ (common practice, no source).
+  const h = Rational.of(1, 2);
+  const j = Matrix.fromRows(QQ, [
+    [h, Rational.ONE, Rational.ZERO, Rational.ZERO],
+    [Rational.ZERO, h, Rational.ZERO, Rational.ZERO],
+    [Rational.ZERO, Rational.ZERO, Rational.ZERO, Rational.MINUS_ONE],
+    [Rational.ZERO, Rational.ZERO, Rational.ONE, Rational.ZERO],
+  ]);
+  const x = intMatrix([[1, 2, 0, 1], [0, 1, 3, 0], [0, 0, 1, 1], [0, 0, 0, 1]]);
+  const xinv = intMatrix([[1, -2, 6, -7], [0, 1, -3, 3], [0, 0, 1, -1], [0, 0, 0, 1]]);
+  assert.ok(x.mul(xinv).equals(Matrix.identity(ZZ, 4)));
+  const a = x.convertTo(QQ).mul(j).mul(xinv.convertTo(QQ));
+  const s = spectrum(a);
+  const half = s.factors.find((g) => g.factor.degree() === 1)!;
+  assert.ok(half.factor.equals(Poly.fromRationals([h.neg(), Rational.ONE])));
+  assert.deepEqual([half.algebraicMultiplicity, half.geometricMultiplicity, half.minimalExponent], [2, 1, 2]);
+  assert.ok(s.minimalPolynomial.equals(s.charpoly));
+  assert.equal(s.determinant.toString(), '1/4');
+});
+
+test('identity and zero matrices: semisimple, minimal polynomial of degree 1 (common practice)', () => {
+  const s = spectrum(Matrix.identity(ZZ, 5));
+  assert.deepEqual(s.factors.map((g) => [g.algebraicMultiplicity, g.geometricMultiplicity, g.minimalExponent]), [[5, 5, 1]]);
+  assert.ok(s.minimalPolynomial.equals(Poly.fromInts([-1, 1])));
+  const z = spectrum(Matrix.zero(ZZ, 3));
+  assert.ok(z.minimalPolynomial.equals(Poly.x()));
+});
+
+test('size limit and non-rational domains are refused up front', () => {
+  assert.throws(() => spectrum(Matrix.identity(ZZ, 41)), BudgetError);
+  assert.throws(() => spectrum(Matrix.identity(ZZ, 6), undefined, { maxSize: 5 }), BudgetError);
+  assert.throws(() => spectrum(Matrix.identity(ZZ, 3).convertTo({ ...QQ, name: 'Q(√2)' }) as never), DomainError);
+});
