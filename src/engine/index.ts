@@ -9,3 +9,4 @@ export * from './matrix-domains';
 export * from './matrix-elimination';
 export * from './charpoly';
 export * from './spectrum';
+export * from './roots';

