@@ -10,3 +10,5 @@ export * from './matrix-elimination';
 export * from './charpoly';
 export * from './spectrum';
 export * from './roots';
+export * from './numberfield';
+export * from './kpoly';
