@@ -1,0 +1,269 @@
+/**
+ * One statement → definitions and verdicts. Reads each link of a relation chain: a definition
+ * binds a name; a claim involving a matrix is decided exactly; prose among scalars is left alone.
+ */
+import { Budget } from '../engine/index';
+import type { Expr, Link, Statement } from '../notation/index';
+import { compareValues, distinctScalars } from './compare';
+import type { Environment } from './environment';
+import { displayName, evaluate, type EvalContext } from './evaluate';
+import { decimalPlaces, involvesExponential, involvesMatrix, isLiteralValue, styleOf, walk } from './inspect';
+import { valueLatex, valueText, type PrintStyle } from './print';
+import type { ClaimResult, CheckerConfig, DefinitionRef, TextEdit } from './types';
+import { Undecidable, type Value } from './values';
+
+/** What processing a statement needs. */
+export interface StatementContext {
+  /** The whole document text (offsets are absolute). */
+  readonly text: string;
+  readonly env: Environment;
+  readonly config: CheckerConfig;
+  readonly isCancelled: () => boolean;
+  /** Plain-text rendering of an expression as the user wrote it (for messages). */
+  readonly plain: (e: Expr) => string;
+  /** Bind definitions only, deciding no claims (for hovers, which need the names in scope). */
+  readonly definitionsOnly?: boolean;
+}
+
+const RESERVED = new Set(['I', 'e', 'i', '\\pi']);
+
+function newBudget(ctx: StatementContext): Budget {
+  return new Budget({ timeMs: ctx.config.timeBudgetMs, isCancelled: ctx.isCancelled });
+}
+
+function evalContext(ctx: StatementContext, budget: Budget): EvalContext {
+  return { env: ctx.env, budget, maxMatrixSize: ctx.config.maxMatrixSize, used: [] };
+}
+
+function related(ec: EvalContext): DefinitionRef[] {
+  return ec.used.map((d) => ({ name: d.name, start: d.start, end: d.end }));
+}
+
+function unwrap(e: Expr): Expr {
+  return e.kind === 'group' ? unwrap(e.inner) : e;
+}
+
+/** Processes one statement: binds definitions in `ctx.env` and returns the claims' verdicts. */
+export function processStatement(statement: Statement, ctx: StatementContext): ClaimResult[] {
+  const results: ClaimResult[] = [];
+  statement.links.forEach((link, index) => {
+    const result = processLink(link, index, statement, ctx);
+    if (result) results.push(result);
+  });
+  return results;
+}
+
+function processLink(link: Link, index: number, statement: Statement, ctx: StatementContext): ClaimResult | undefined {
+  const left = unwrap(link.left);
+  const relation = link.relation.kind;
+  const isFirst = index === 0 && !statement.continued && !link.continued;
+  if (relation === 'other') return undefined;
+
+  // Definitions: `A := M` always; `A = M` when A has no definition above.
+  if (left.kind === 'symbol' && !RESERVED.has(left.base) && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup(left.key)))) {
+    const definition = tryDefinition(left.key, left.start, left.end, link, ctx);
+    if (definition !== 'not-a-matrix') return definition;
+    // A scalar named by a letter (`d = \det A`): not bound, and not a claim on its own.
+    if (relation === 'defines' || !ctx.env.lookup(left.key)) return undefined;
+  }
+
+  if (ctx.definitionsOnly) return undefined;
+  const involves = involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
+  if (!involves && relation !== 'similar') return undefined;
+  return decideClaim(link, ctx);
+}
+
+function tryDefinition(key: string, nameStart: number, nameEnd: number, link: Link, ctx: StatementContext): ClaimResult | undefined | 'not-a-matrix' {
+  const budget = newBudget(ctx);
+  const ec = evalContext(ctx, budget);
+  let value: Value;
+  try {
+    value = evaluate(link.right, ec);
+  } catch (error) {
+    if (!(error instanceof Undecidable)) throw error;
+    // Only report when the right side looks like a matrix; otherwise it is scalar prose.
+    if (!involvesMatrix(link.right, ctx.env)) return 'not-a-matrix';
+    return result(link, ctx, 'unchecked', `definition.unreadable`, `${displayName(key)} could not be read: ${error.message}`, related(ec));
+  }
+  if (value.kind !== 'matrix') return 'not-a-matrix';
+  let environment;
+  walk(link.right, (n) => {
+    if (n.kind === 'matrix' && !environment) environment = n.environment;
+  });
+  ctx.env.define({
+    key,
+    name: ctx.text.slice(nameStart, nameEnd),
+    value: value.value,
+    start: link.start,
+    end: link.end,
+    environment,
+    hasDecimals: decimalPlaces(link.right) !== undefined,
+  });
+  return undefined;
+}
+
+function result(
+  link: Link,
+  ctx: StatementContext,
+  verdict: ClaimResult['verdict'],
+  code: string,
+  message: string,
+  relatedRefs: DefinitionRef[],
+  extra: { expected?: string; fix?: TextEdit; caution?: boolean } = {},
+): ClaimResult {
+  return {
+    start: link.start,
+    end: link.end,
+    text: ctx.text.slice(link.start, link.end),
+    verdict,
+    code,
+    message,
+    related: relatedRefs,
+    ...(extra.expected !== undefined ? { expected: extra.expected } : {}),
+    ...(extra.fix ? { fix: extra.fix } : {}),
+    ...(extra.caution ? { caution: true } : {}),
+  };
+}
+
+/** The code family of a claim, from what its computed side is. */
+function claimFamily(e: Expr): string {
+  const u = unwrap(e);
+  if (u.kind === 'apply') {
+    switch (u.func) {
+      case 'det':
+      case 'abs':
+        return 'det';
+      case 'trace':
+        return 'trace';
+      case 'rank':
+        return 'rank';
+      case 'nullity':
+        return 'nullity';
+      case 'charpoly':
+        return 'charpoly';
+      case 'minpoly':
+        return 'minpoly';
+      case 'spectrum':
+        return 'spectrum';
+      case 'exp':
+        return 'exp';
+      default:
+        return 'value';
+    }
+  }
+  if (u.kind === 'power' && u.exponent.kind === 'negate') return 'inverse';
+  if (u.kind === 'power') return 'power';
+  return 'matrix';
+}
+
+function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
+  const budget = newBudget(ctx);
+  const ec = evalContext(ctx, budget);
+  const caution = involvesExponential(link.left) || involvesExponential(link.right);
+  // The claimed value is the side a fix may replace: the right, unless only the left is a literal.
+  const rightLiteral = isLiteralValue(link.right, ctx.env);
+  const leftLiteral = isLiteralValue(link.left, ctx.env);
+  const swap = leftLiteral && !rightLiteral;
+  const computedExpr = swap ? link.right : link.left;
+  const claimedExpr = swap ? link.left : link.right;
+  const family = claimFamily(computedExpr);
+  let computed: Value;
+  let claimed: Value;
+  try {
+    computed = evaluate(computedExpr, ec);
+    claimed = evaluate(claimedExpr, ec);
+  } catch (error) {
+    if (!(error instanceof Undecidable)) throw error;
+    return result(link, ctx, 'unchecked', error.code, error.message, related(ec), { caution });
+  }
+  const relation = link.relation.kind;
+  if (relation === 'similar') {
+    return result(link, ctx, 'unchecked', 'unchecked.unsupported', 'similarity (Jordan structure) is not supported yet', related(ec), { caution });
+  }
+  if (relation === 'less' || relation === 'greater' || relation === 'lessOrEqual' || relation === 'greaterOrEqual') {
+    return decideOrder(link, ctx, computed, claimed, swap, related(ec), caution);
+  }
+  const style = styleOf(claimedExpr, ctx.env.lookup(firstMatrixKey(computedExpr) ?? '')?.environment);
+  const claimedPlaces = entryPlaces(claimedExpr);
+  let comparison;
+  try {
+    comparison = compareValues(computed, claimed, claimedPlaces);
+  } catch (error) {
+    if (!(error instanceof Undecidable)) throw error;
+    return result(link, ctx, 'unchecked', error.code, error.message, related(ec), { caution });
+  }
+  const computedPlain = ctx.plain(computedExpr);
+  const claimedPlain = ctx.plain(claimedExpr);
+  const shown = comparison.listForm === 'set' && computed.kind === 'list' ? { kind: 'list' as const, elements: distinctScalars(computed.elements) } : computed;
+  const expected = valueLatex(shown, style);
+  const expectedText = valueText(shown, style);
+  const exactText = valueText(shown, { ...style, decimalPlaces: undefined });
+
+  if (relation === 'notEquals') {
+    if (!comparison.equal) return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} ≠ ${claimedPlain} holds`, related(ec), { caution });
+    return result(link, ctx, 'fails', `${family}.equal`, `${computedPlain} equals ${claimedPlain}: both are ${exactText}`, related(ec), { expected, caution });
+  }
+  if (relation === 'approx') {
+    if (comparison.equal || comparison.withinWrittenPrecision) {
+      return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} ≈ ${claimedPlain} holds (exact value ${exactText})`, related(ec), { caution });
+    }
+  } else if (comparison.equal) {
+    return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} = ${claimedPlain} holds`, related(ec), { caution });
+  } else if (comparison.withinWrittenPrecision) {
+    return result(
+      link,
+      ctx,
+      'holds',
+      'claim.holds-to-precision',
+      `${computedPlain} = ${claimedPlain} holds only to the written precision: the exact value is ${exactText}`,
+      related(ec),
+      { caution },
+    );
+  }
+  const fixable = isLiteralValue(claimedExpr, ctx.env) && !(computed.kind === 'matrix' && claimed.kind !== 'matrix');
+  const fix: TextEdit | undefined = fixable ? { offset: claimedExpr.start, length: claimedExpr.end - claimedExpr.start, text: expected } : undefined;
+  return result(link, ctx, 'fails', `${family}.mismatch`, `${computedPlain} is ${expectedText}, not ${claimedPlain}`, related(ec), {
+    expected,
+    ...(fix ? { fix } : {}),
+    caution,
+  });
+}
+
+function decideOrder(link: Link, ctx: StatementContext, computed: Value, claimed: Value, swapped: boolean, refs: DefinitionRef[], caution: boolean): ClaimResult {
+  if (computed.kind !== 'scalar' || claimed.kind !== 'scalar' || computed.value.k !== 'num' || claimed.value.k !== 'num') {
+    return result(link, ctx, 'unchecked', 'unchecked.unsupported', 'only real numbers can be ordered', refs, { caution });
+  }
+  const [l, r] = swapped ? [claimed.value.v, computed.value.v] : [computed.value.v, claimed.value.v];
+  const c = l.compare(r);
+  const kind = link.relation.kind;
+  const holds = kind === 'less' ? c < 0 : kind === 'greater' ? c > 0 : kind === 'lessOrEqual' ? c <= 0 : c >= 0;
+  const text = ctx.text.slice(link.start, link.end).trim();
+  return holds
+    ? result(link, ctx, 'holds', 'claim.holds', `${text} holds`, refs, { caution })
+    : result(link, ctx, 'fails', 'order.mismatch', `${text} does not hold: the left side is ${l.toString()} and the right side ${r.toString()}`, refs, {
+        expected: (swapped ? claimed : computed).kind === 'scalar' ? valueLatex(computed) : undefined,
+        caution,
+      });
+}
+
+function firstMatrixKey(e: Expr): string | undefined {
+  let key: string | undefined;
+  walk(e, (n) => {
+    if (!key && n.kind === 'symbol') key = n.key;
+  });
+  return key;
+}
+
+/** Decimal places written at each scalar position of the claimed side (row-major for matrices). */
+function entryPlaces(claimed: Expr): (index: number) => number | undefined {
+  const u = unwrap(claimed);
+  if (u.kind === 'matrix') {
+    const flat = u.rows.flat();
+    return (i) => (flat[i] ? decimalPlaces(flat[i]) : undefined);
+  }
+  const places = decimalPlaces(u);
+  return () => places;
+}
+
+/** A print style for a value that follows the claimed expression. */
+export type { PrintStyle };

@@ -1,0 +1,126 @@
+/**
+ * Questions asked of expression trees before evaluating them: does a side involve a matrix (which
+ * makes a statement a claim), is it a literal value (which a fix may replace), and how was it
+ * written (decimals, fractions, matrix environment), so that corrections read like the note.
+ */
+import type { Expr, MatrixEnvironment } from '../notation/index';
+import type { Environment } from './environment';
+import type { PrintStyle } from './print';
+
+const MATRIX_FUNCTIONS = new Set(['det', 'trace', 'rank', 'nullity', 'charpoly', 'minpoly', 'spectrum', 'diag', 'jordanBlock']);
+
+/** Calls `visit` on every node of the tree (iteratively, so deep trees cannot overflow the stack). */
+export function walk(root: Expr, visit: (e: Expr) => boolean | void): void {
+  const stack: Expr[] = [root];
+  while (stack.length) {
+    const e = stack.pop()!;
+    if (visit(e) === false) continue;
+    for (const child of children(e)) stack.push(child);
+  }
+}
+
+/** The direct children of a node. */
+export function children(e: Expr): Expr[] {
+  switch (e.kind) {
+    case 'fraction':
+      return [e.numerator, e.denominator];
+    case 'identity':
+      return e.size ? [e.size] : [];
+    case 'negate':
+    case 'transpose':
+    case 'conjugateTranspose':
+    case 'factorial':
+      return [e.operand];
+    case 'plusMinus':
+      return e.left ? [e.left, e.right] : [e.right];
+    case 'add':
+    case 'subtract':
+    case 'multiply':
+    case 'directSum':
+      return [e.left, e.right];
+    case 'power':
+      return [e.base, e.exponent];
+    case 'sqrt':
+      return e.index ? [e.radicand, e.index] : [e.radicand];
+    case 'group':
+      return [e.inner];
+    case 'tuple':
+    case 'set':
+    case 'list':
+      return e.elements;
+    case 'apply':
+      return [...e.args, ...(e.subscript ? [e.subscript] : []), ...(e.nameSuperscript ? [e.nameSuperscript] : [])];
+    case 'matrix':
+      return e.rows.flat();
+    case 'indexed':
+      return [e.base, e.index];
+    default:
+      return [];
+  }
+}
+
+/** True when the expression mentions a defined matrix, a matrix literal or a matrix operation. */
+export function involvesMatrix(e: Expr, env: Environment): boolean {
+  let found = false;
+  walk(e, (n) => {
+    if (found) return false;
+    if (n.kind === 'matrix' || n.kind === 'directSum') found = true;
+    else if (n.kind === 'symbol' && env.lookup(n.key)) found = true;
+    else if (n.kind === 'apply' && MATRIX_FUNCTIONS.has(n.func)) found = true;
+    return !found;
+  });
+  return found;
+}
+
+/** True when the expression contains `e^{…}`/`\exp` or a trigonometric function (caution applies). */
+export function involvesExponential(e: Expr): boolean {
+  let found = false;
+  walk(e, (n) => {
+    if (n.kind === 'apply' && (n.func === 'exp' || n.func === 'cos' || n.func === 'sin' || n.func === 'cosh' || n.func === 'sinh')) found = true;
+    return !found;
+  });
+  return found;
+}
+
+/**
+ * True when the expression is a value a fix may replace: numbers, fractions, matrix literals,
+ * lists, free symbols and functions of them — no defined names and no matrix operations.
+ */
+export function isLiteralValue(e: Expr, env: Environment): boolean {
+  let literal = true;
+  walk(e, (n) => {
+    if (!literal) return false;
+    if (n.kind === 'symbol' && env.lookup(n.key)) literal = false;
+    else if (n.kind === 'apply' && (MATRIX_FUNCTIONS.has(n.func) && n.func !== 'diag' && n.func !== 'jordanBlock')) literal = false;
+    else if (n.kind === 'error' || n.kind === 'ellipsis') literal = false;
+    return literal;
+  });
+  return literal;
+}
+
+/** The largest number of decimal places written in the expression, or undefined without decimals. */
+export function decimalPlaces(e: Expr): number | undefined {
+  let places: number | undefined;
+  walk(e, (n) => {
+    if (n.kind === 'number' && n.isDecimal) places = Math.max(places ?? 0, n.decimalPlaces);
+  });
+  return places;
+}
+
+/** The style to print a correction to `claimed` in. */
+export function styleOf(claimed: Expr | undefined, fallbackEnvironment?: MatrixEnvironment): PrintStyle {
+  let environment: MatrixEnvironment | undefined;
+  let fraction: PrintStyle['fraction'] | undefined;
+  if (claimed) {
+    walk(claimed, (n) => {
+      if (n.kind === 'matrix' && !environment) environment = n.environment;
+      if (n.kind === 'fraction' && !fraction) fraction = n.form === 'slash' ? 'slash' : n.form === 'cfrac' ? 'frac' : n.form;
+    });
+  }
+  const places = claimed ? decimalPlaces(claimed) : undefined;
+  return {
+    environment: environment ?? fallbackEnvironment ?? 'pmatrix',
+    fraction: fraction ?? 'frac',
+    ...(places !== undefined ? { decimalPlaces: places } : {}),
+  };
+}

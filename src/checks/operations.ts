@@ -1,0 +1,224 @@
+/**
+ * Arithmetic on values (scalars, matrices, the unsized identity) and the matrix functions claims
+ * use. Rational matrices take the engine's fast exact routes; others run the generic kernels over
+ * the scalar field.
+ */
+import { Budget, determinant as engineDeterminant, Matrix, QQ, rank as engineRank, inverse as engineInverse, Rational, directSum as engineDirectSum } from '../engine/index';
+import type { Expr } from '../notation/index';
+import type { EvalContext } from './evaluate';
+import { asRational, num, powScalar, SCALAR, type Scalar } from './scalar';
+import { scalarValue, shapeText, Undecidable, type Value } from './values';
+
+/** The rational matrix with the same entries, when every entry is rational. */
+export function toRationalMatrix(m: Matrix<Scalar>): Matrix<Rational> | undefined {
+  const entries: Rational[] = [];
+  for (const e of m.entries) {
+    const r = asRational(e);
+    if (!r) return undefined;
+    entries.push(r);
+  }
+  return Matrix.fromEntries(QQ, m.rows, m.cols, entries);
+}
+
+/** A rational matrix as scalars. */
+export function fromRationalMatrix(m: Matrix<Rational>): Matrix<Scalar> {
+  return Matrix.fromEntries(SCALAR, m.rows, m.cols, m.entries.map((r) => num(r)));
+}
+
+function sizedIdentity(n: number): Matrix<Scalar> {
+  return Matrix.identity(SCALAR, n);
+}
+
+function requireSameShape(a: Matrix<Scalar>, b: Matrix<Scalar>, op: string): void {
+  if (a.rows !== b.rows || a.cols !== b.cols) {
+    throw new Undecidable('unchecked.size-mismatch', `cannot ${op} a ${shapeText(a)} and a ${shapeText(b)} matrix`);
+  }
+}
+
+function requireSquare(m: Matrix<Scalar>, what: string): number {
+  if (m.rows !== m.cols) throw new Undecidable('unchecked.size-mismatch', `${what} needs a square matrix, this one is ${shapeText(m)}`);
+  return m.rows;
+}
+
+/** Brings an unsized identity to the size of the other operand. */
+function fit(a: Value, b: Value): [Value, Value] {
+  if (a.kind === 'identity' && b.kind === 'matrix') return [{ kind: 'matrix', value: sizedIdentity(requireSquare(b.value, 'I')) }, b];
+  if (b.kind === 'identity' && a.kind === 'matrix') return [a, { kind: 'matrix', value: sizedIdentity(requireSquare(a.value, 'I')) }];
+  return [a, b];
+}
+
+function scalarTimesIdentity(s: Scalar, n: number): Matrix<Scalar> {
+  return Matrix.build(SCALAR, n, n, (i, j) => (i === j ? s : SCALAR.zero));
+}
+
+/** a + b. A scalar added to a square matrix is read as a multiple of I (as in A − λ). */
+export function add(a: Value, b: Value): Value {
+  [a, b] = fit(a, b);
+  if (a.kind === 'scalar' && b.kind === 'scalar') return scalarValue(SCALAR.add(a.value, b.value));
+  if (a.kind === 'matrix' && b.kind === 'matrix') {
+    requireSameShape(a.value, b.value, 'add');
+    return { kind: 'matrix', value: a.value.add(b.value) as Matrix<Scalar> };
+  }
+  if (a.kind === 'matrix' && b.kind === 'scalar') return add(a, { kind: 'matrix', value: scalarTimesIdentity(b.value, requireSquare(a.value, 'adding a number')) });
+  if (a.kind === 'scalar' && b.kind === 'matrix') return add({ kind: 'matrix', value: scalarTimesIdentity(a.value, requireSquare(b.value, 'adding a number')) }, b);
+  if (a.kind === 'identity' && b.kind === 'identity') return { kind: 'identity' };
+  throw new Undecidable('unchecked.unsupported', 'these two values cannot be added');
+}
+
+/** −a. */
+export function negate(a: Value): Value {
+  if (a.kind === 'scalar') return scalarValue(SCALAR.neg(a.value));
+  if (a.kind === 'matrix') return { kind: 'matrix', value: a.value.neg() };
+  throw new Undecidable('unchecked.unsupported', 'this value cannot be negated');
+}
+
+/** a − b. */
+export function subtract(a: Value, b: Value): Value {
+  return add(a, negate(fit(a, b)[1]));
+}
+
+/** a·b: scalar products, scalar multiples and matrix products (shapes checked). */
+export function multiply(a: Value, b: Value, budget: Budget): Value {
+  [a, b] = fit(a, b);
+  if (a.kind === 'identity') return b;
+  if (b.kind === 'identity') return a;
+  if (a.kind === 'scalar' && b.kind === 'scalar') return scalarValue(SCALAR.mul(a.value, b.value));
+  if (a.kind === 'scalar' && b.kind === 'matrix') return { kind: 'matrix', value: b.value.scale(a.value) };
+  if (a.kind === 'matrix' && b.kind === 'scalar') return { kind: 'matrix', value: a.value.scale(b.value) };
+  if (a.kind === 'matrix' && b.kind === 'matrix') {
+    if (a.value.cols !== b.value.rows) {
+      throw new Undecidable('unchecked.size-mismatch', `cannot multiply a ${shapeText(a.value)} by a ${shapeText(b.value)} matrix`);
+    }
+    const ra = toRationalMatrix(a.value);
+    const rb = ra && toRationalMatrix(b.value);
+    if (ra && rb) return { kind: 'matrix', value: fromRationalMatrix(ra.mul(rb, budget) as Matrix<Rational>) };
+    return { kind: 'matrix', value: a.value.mul(b.value, budget) as Matrix<Scalar> };
+  }
+  throw new Undecidable('unchecked.unsupported', 'these two values cannot be multiplied');
+}
+
+/** a / b for scalars, and a matrix divided by a scalar. */
+export function divide(a: Value, b: Value): Value {
+  if (b.kind !== 'scalar') throw new Undecidable('unchecked.unsupported', 'division by a matrix is not defined; write M^{-1}');
+  if (SCALAR.isZero(b.value)) throw new Undecidable('unchecked.division-by-zero', 'the expression divides by zero');
+  if (a.kind === 'scalar') return scalarValue(SCALAR.div(a.value, b.value));
+  if (a.kind === 'matrix') return { kind: 'matrix', value: a.value.scale(SCALAR.inv(b.value)) };
+  throw new Undecidable('unchecked.unsupported', 'this value cannot be divided');
+}
+
+/** The inverse of a square matrix (Undecidable when singular). */
+export function inverseOf(m: Matrix<Scalar>, budget: Budget): Matrix<Scalar> {
+  requireSquare(m, 'the inverse');
+  const r = toRationalMatrix(m);
+  if (r) return fromRationalMatrix(engineInverse(r, budget));
+  return engineInverse(m, budget);
+}
+
+/** a^k (negative k inverts). */
+export function power(a: Value, k: number, budget: Budget): Value {
+  if (a.kind === 'identity') return a;
+  if (a.kind === 'scalar') {
+    if (k < 0 && SCALAR.isZero(a.value)) throw new Undecidable('unchecked.division-by-zero', '0 has no negative powers');
+    return scalarValue(powScalar(a.value, k));
+  }
+  if (a.kind === 'matrix') {
+    requireSquare(a.value, 'a matrix power');
+    let base = a.value;
+    if (k < 0) {
+      base = inverseOf(base, budget);
+      k = -k;
+    }
+    const r = toRationalMatrix(base);
+    if (r) return { kind: 'matrix', value: fromRationalMatrix(r.pow(k, budget)) };
+    return { kind: 'matrix', value: base.pow(k, budget) };
+  }
+  throw new Undecidable('unchecked.unsupported', 'a list has no powers');
+}
+
+/** Block-diagonal direct sum. */
+export function directSum(...blocks: Matrix<Scalar>[]): Value {
+  const total = blocks.reduce((s, b) => s + b.rows, 0);
+  if (total > 400) throw new Undecidable('unchecked.budget', `a ${total}×${total} direct sum is over the size budget`);
+  return { kind: 'matrix', value: engineDirectSum(...blocks) };
+}
+
+/** det of a square matrix. */
+export function determinant(m: Matrix<Scalar>, budget: Budget): Scalar {
+  requireSquare(m, 'det');
+  const r = toRationalMatrix(m);
+  if (r) return num(engineDeterminant(r, budget));
+  return engineDeterminant(m, budget);
+}
+
+/** The trace of a square matrix. */
+export function trace(m: Matrix<Scalar>): Scalar {
+  requireSquare(m, 'the trace');
+  return m.trace();
+}
+
+/** The rank. */
+export function rankOf(m: Matrix<Scalar>, budget: Budget): number {
+  const r = toRationalMatrix(m);
+  return r ? engineRank(r, budget) : engineRank(m, budget);
+}
+
+/** Complex conjugation of a scalar (identity on real values). */
+export function conjugate(s: Scalar): Scalar {
+  return s;
+}
+
+/** |x| for a real scalar. */
+export function absolute(s: Scalar): Scalar {
+  const r = asRational(s);
+  if (r) return num(r.abs());
+  throw new Undecidable('unchecked.unsupported', '|x| is supported for rational x');
+}
+
+/** The n-th root of a scalar, exact when it is rational. */
+export function root(s: Scalar, n: number): Scalar {
+  const r = asRational(s);
+  if (r && n >= 1) {
+    const exact = rationalRoot(r, n);
+    if (exact) return num(exact);
+  }
+  throw new Undecidable('unchecked.unsupported', 'irrational roots are not supported here yet');
+}
+
+function integerRoot(x: bigint, n: number): bigint | undefined {
+  if (x < 0n) return n % 2 === 1 ? (() => { const r = integerRoot(-x, n); return r === undefined ? undefined : -r; })() : undefined;
+  if (x < 2n) return x;
+  let lo = 0n;
+  let hi = 1n << BigInt(Math.ceil(x.toString(2).length / n) + 1);
+  while (lo < hi) {
+    const mid = (lo + hi + 1n) >> 1n;
+    if (mid ** BigInt(n) <= x) lo = mid;
+    else hi = mid - 1n;
+  }
+  return lo ** BigInt(n) === x ? lo : undefined;
+}
+
+function rationalRoot(r: Rational, n: number): Rational | undefined {
+  const a = integerRoot(r.num, n);
+  const b = integerRoot(r.den, n);
+  return a !== undefined && b !== undefined ? Rational.of(a, b) : undefined;
+}
+
+/** χ_A(x) or μ_A(x) evaluated at the given argument. */
+export function polynomialOfMatrix(_which: 'charpoly' | 'minpoly', _m: Matrix<Scalar>, _args: readonly Expr[], _ctx: EvalContext): Value {
+  throw new Undecidable('unchecked.unsupported', 'characteristic and minimal polynomials are not supported yet');
+}
+
+/** σ(A) as a list of eigenvalues with algebraic multiplicity. */
+export function spectrumValue(_m: Matrix<Scalar>, _budget: Budget): Value {
+  throw new Undecidable('unchecked.unsupported', 'eigenvalues are not supported yet');
+}
+
+/** e^{M}, e^{At}. */
+export function exponential(_arg: Expr, _ctx: EvalContext): Value {
+  throw new Undecidable('unchecked.unsupported', 'matrix exponentials are not supported yet');
+}
+
+/** cos, sin, cosh, sinh of a scalar expression in t. */
+export function trigonometric(_f: 'cos' | 'sin' | 'cosh' | 'sinh', _arg: Expr, _ctx: EvalContext): Value {
+  throw new Undecidable('unchecked.unsupported', 'trigonometric functions are not supported yet');
+}
