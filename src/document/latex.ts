@@ -1,0 +1,303 @@
+/**
+ * LaTeX scanning: @unified-latex's grammar finds the structure (math, environments, comments,
+ * verbatim), we turn its nodes into regions with exact offsets.
+ *
+ * The document body is scanned (after `\begin{document}`, up to `\end{document}`); a file without
+ * `\begin{document}` is a fragment and scanned whole. The body is parsed in chunks of whole
+ * paragraphs: TeX ends every kind of math at a paragraph break, so a chunk boundary at a blank
+ * line never cuts a region, and it keeps the (slow, memory-hungry) grammar on small inputs. When a
+ * `$` is left open, the grammar pairs it with a `$` paragraphs later; we detect the paragraph
+ * break inside the region, report the open `$`, and parse again from the line after the break,
+ * which is where TeX itself resumes.
+ */
+import type { MathRegion, Problem, ScanResult, TextRange } from './types.js';
+import { closeRanges, problemCodes } from './common.js';
+import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, findParagraphBreak, lineEndAt, nextParagraphStart } from './latex-vocabulary.js';
+import { type LatexNode, environmentName, groupText, parseLatexNodes } from './latex-parse.js';
+import { scanLatexFallback } from './latex-fallback.js';
+
+/** About how many characters one parse covers (rounded up to the next paragraph break). */
+const CHUNK_SIZE = 8000;
+
+/** What to do after scanning a span. */
+type SpanNext = { kind: 'done' } | { kind: 'resume'; at: number } | { kind: 'stop' };
+
+/** State of one span's walk. */
+interface SpanWalk {
+  text: string;
+  shift: number;
+  documentEnd: number;
+  regions: MathRegion[];
+  problems: Problem[];
+}
+
+/** Finds every math region of SPEC §2 in a LaTeX document. */
+export function scanLatex(text: string): ScanResult {
+  const regions: MathRegion[] = [];
+  const problems: Problem[] = [];
+  const bodyStart = findBodyStart(text);
+  const end = text.length;
+  let from = bodyStart;
+  let chunkEnd = from;
+  while (from < end) {
+    if (chunkEnd <= from) chunkEnd = nextParagraphStart(text, Math.min(from + CHUNK_SIZE, end), end);
+    const walk: SpanWalk = { text, shift: from, documentEnd: end, regions, problems };
+    const next = scanSpan(walk, from, chunkEnd);
+    if (next.kind === 'stop') break;
+    from = next.kind === 'resume' ? Math.max(next.at, from + 1) : chunkEnd;
+  }
+  return { regions, problems };
+}
+
+/** Parses `[from, to)` and walks it; a parser failure hands the span to the local scanner. */
+function scanSpan(walk: SpanWalk, from: number, to: number): SpanNext {
+  const { text } = walk;
+  let nodes: LatexNode[];
+  try {
+    nodes = parseLatexNodes(text.slice(from, to));
+  } catch (error) {
+    walk.problems.push({
+      code: problemCodes.parserFallback,
+      message: `the LaTeX parser failed here (${error instanceof Error ? error.message.slice(0, 120) : 'unknown error'}); this passage was scanned by the simpler local scanner`,
+      start: from,
+      end: Math.min(to, lineEndAt(text, from, to)),
+    });
+    const fallback = scanLatexFallback(text, from, to);
+    walk.regions.push(...fallback.regions);
+    walk.problems.push(...fallback.problems);
+    return fallback.stopped ? { kind: 'stop' } : { kind: 'done' };
+  }
+  return walkNodes(walk, nodes) ?? { kind: 'done' };
+}
+
+const startOf = (walk: SpanWalk, node: LatexNode): number => walk.shift + (node.position?.start.offset ?? 0);
+const endOf = (walk: SpanWalk, node: LatexNode): number => walk.shift + (node.position?.end.offset ?? 0);
+
+/** The next sibling after index `i` that is not whitespace or a comment. */
+function nextSignificant(nodes: LatexNode[], i: number): LatexNode | undefined {
+  for (let j = i + 1; j < nodes.length; j++) {
+    const type = nodes[j].type;
+    if (type !== 'whitespace' && type !== 'comment') return nodes[j];
+  }
+  return undefined;
+}
+
+/** Walks nodes in text mode; returns an outcome when the rest of the span must not be used. */
+function walkNodes(walk: SpanWalk, nodes: LatexNode[]): SpanNext | undefined {
+  // The grammar emits the verbatim argument of \lstinline again as sibling strings positioned
+  // inside the macro; anything that starts before the previous node ended is such a copy.
+  let coveredUntil = -1;
+  for (let i = 0; i < nodes.length; i++) {
+    const node = nodes[i];
+    if (!node.position) continue;
+    if (startOf(walk, node) < coveredUntil) continue;
+    coveredUntil = endOf(walk, node);
+    switch (node.type) {
+      case 'inlinemath':
+      case 'displaymath': {
+        const next = delimitedRegion(walk, node);
+        if (next) return next;
+        break;
+      }
+      case 'mathenv':
+      case 'environment': {
+        const name = environmentName(node) ?? '';
+        if (MATH_ENVIRONMENTS.has(name)) environmentRegion(walk, node, name);
+        else if (!VERBATIM_ENVIRONMENTS.has(name) && Array.isArray(node.content)) {
+          const next = walkNodes(walk, node.content);
+          if (next) return next;
+        }
+        break;
+      }
+      case 'group': {
+        if (Array.isArray(node.content)) {
+          const next = walkNodes(walk, node.content);
+          if (next) return next;
+        }
+        break;
+      }
+      case 'macro': {
+        const next = macroOutcome(walk, nodes, i);
+        if (next) return next;
+        break;
+      }
+      case 'string': {
+        if (typeof node.content === 'string' && node.content.includes('$')) {
+          const at = startOf(walk, node) + node.content.indexOf('$');
+          walk.problems.push({
+            code: problemCodes.unterminatedMath,
+            message: '`$` opens math that is never closed',
+            start: at,
+            end: at + (walk.text[at + 1] === '$' ? 2 : 1),
+          });
+        }
+        break;
+      }
+      default:
+        // comments, verb, verbatim, whitespace, parbreak: nothing to scan.
+        break;
+    }
+  }
+  return undefined;
+}
+
+/** Handles a macro that matters at text level: stray delimiters, unbalanced environments. */
+function macroOutcome(walk: SpanWalk, nodes: LatexNode[], i: number): SpanNext | undefined {
+  const { text } = walk;
+  const node = nodes[i];
+  const name = node.content;
+  const start = startOf(walk, node);
+  const end = endOf(walk, node);
+  if (name === '(' || name === '[') {
+    const closer = name === '(' ? '\\)' : '\\]';
+    walk.problems.push({ code: problemCodes.unterminatedMath, message: `\\${name} has no matching ${closer}`, start, end });
+  } else if (name === ')' || name === ']') {
+    walk.problems.push({ code: problemCodes.unmatchedClose, message: `\\${name} closes math that was never opened`, start, end });
+  } else if (name === 'verb' || name === 'verb*') {
+    // The grammar leaves an unclosed \verb as a bare macro; TeX ends \verb at the line end.
+    const lineEnd = lineEndAt(text, end, walk.documentEnd);
+    walk.problems.push({ code: problemCodes.unterminatedVerbatim, message: '\\verb is not closed on its line', start, end: lineEnd });
+    return { kind: 'resume', at: lineEnd };
+  } else if (name === 'begin' || name === 'end') {
+    const argument = nextSignificant(nodes, i);
+    const environment = groupText(argument);
+    if (environment === undefined || !argument) return undefined;
+    const argumentEnd = endOf(walk, argument);
+    if (name === 'end') {
+      if (environment === 'document') return { kind: 'stop' };
+      if (MATH_ENVIRONMENTS.has(environment)) {
+        walk.problems.push({ code: problemCodes.unmatchedClose, message: `\\end{${environment}} has no matching \\begin{${environment}}`, start, end: argumentEnd });
+      }
+    } else if (VERBATIM_ENVIRONMENTS.has(environment)) {
+      // TeX ends a verbatim body at the first literal \end{name}, whatever lies between.
+      const closing = `\\end{${environment}}`;
+      const closeAt = text.indexOf(closing, argumentEnd);
+      if (closeAt < 0 || closeAt >= walk.documentEnd) {
+        walk.problems.push({ code: problemCodes.unterminatedVerbatim, message: `\\begin{${environment}} is never closed; nothing after it is scanned`, start, end: argumentEnd });
+        return { kind: 'stop' };
+      }
+      return { kind: 'resume', at: closeAt + closing.length };
+    } else if (MATH_ENVIRONMENTS.has(environment)) {
+      walk.problems.push({
+        code: problemCodes.unterminatedMath,
+        message: `\\begin{${environment}} has no \\end{${environment}} before the paragraph ends`,
+        start,
+        end: argumentEnd,
+      });
+    }
+  }
+  return undefined;
+}
+
+/** Source ranges of the `%` comments among `nodes` (recursively), from `%` to the line end. */
+function commentRanges(walk: SpanWalk, nodes: readonly LatexNode[], out: TextRange[] = []): TextRange[] {
+  for (const node of nodes) {
+    if (node.type === 'comment' && node.position) {
+      const start = startOf(walk, node);
+      const end = endOf(walk, node);
+      const percent = walk.text.indexOf('%', start);
+      if (percent >= 0 && percent < end) out.push({ start: percent, end: lineEndAt(walk.text, percent, end) });
+    }
+    if (Array.isArray(node.content)) commentRanges(walk, node.content, out);
+    if (Array.isArray(node.args)) commentRanges(walk, node.args, out);
+  }
+  return out;
+}
+
+/** Adds the region of a `$…$`, `$$…$$`, `\(…\)` or `\[…\]` node. */
+function delimitedRegion(walk: SpanWalk, node: LatexNode): SpanNext | undefined {
+  const { text } = walk;
+  const start = startOf(walk, node);
+  const end = endOf(walk, node);
+  const display = node.type === 'displaymath';
+  const delimiter: MathRegion['delimiter'] = text[start] === '\\' ? (display ? '\\[' : '\\(') : display ? '$$' : '$';
+  const width = delimiter === '$' ? 1 : 2;
+  const contentStart = start + width;
+  const contentEnd = Math.max(contentStart, end - width);
+  const skips = closeRanges(commentRanges(walk, Array.isArray(node.content) ? node.content : []), contentStart, contentEnd);
+  const paragraphBreak = findParagraphBreak(text, contentStart, contentEnd, skips);
+  if (paragraphBreak && (delimiter === '$' || delimiter === '$$')) {
+    walk.problems.push({
+      code: problemCodes.unterminatedMath,
+      message: `\`${delimiter}\` opens math that is not closed before the paragraph ends`,
+      start,
+      end: start + width,
+    });
+    return { kind: 'resume', at: paragraphBreak.resume };
+  }
+  if (paragraphBreak) {
+    walk.problems.push({ code: problemCodes.paragraphInMath, message: `a blank line inside ${delimiter}…: TeX ends the paragraph here`, start: paragraphBreak.at, end: paragraphBreak.resume });
+  }
+  walk.regions.push({ kind: display ? 'display' : 'inline', delimiter, start, end, contentStart, contentEnd, skips });
+  return undefined;
+}
+
+/** Adds the region of a math environment (`equation`, `align*`, …). */
+function environmentRegion(walk: SpanWalk, node: LatexNode, name: string): void {
+  const { text } = walk;
+  const start = startOf(walk, node);
+  const end = endOf(walk, node);
+  const content = Array.isArray(node.content) ? node.content : [];
+  let contentStart = text.indexOf('}', start) + 1;
+  if (name.startsWith('alignat')) {
+    // \begin{alignat}{n}: the column count is an argument, not math.
+    const first = content.find((child) => child.type !== 'whitespace' && child.type !== 'comment');
+    if (first && first.type === 'group' && first.position) contentStart = Math.max(contentStart, endOf(walk, first));
+  }
+  let contentEnd = text.lastIndexOf('\\end', end - 1);
+  if (contentEnd < contentStart) contentEnd = contentStart;
+  const skips = closeRanges(commentRanges(walk, content), contentStart, contentEnd);
+  const paragraphBreak = findParagraphBreak(text, contentStart, contentEnd, skips);
+  if (paragraphBreak) {
+    walk.problems.push({ code: problemCodes.paragraphInMath, message: `a blank line inside ${name}: TeX stops with an error here`, start: paragraphBreak.at, end: paragraphBreak.resume });
+  }
+  walk.regions.push({ kind: MATH_ENVIRONMENTS.get(name)!, delimiter: 'env', environment: name, start, end, contentStart, contentEnd, skips });
+}
+
+/**
+ * Where the body starts: just after the first `\begin{document}` that the parser confirms is real
+ * markup (not inside a comment or verbatim), or 0 for a fragment. The preamble alone is parsed to
+ * confirm; a preamble larger than {@link PREAMBLE_PARSE_LIMIT} is checked line-locally instead.
+ */
+function findBodyStart(text: string): number {
+  const marker = '\\begin{document}';
+  let at = text.indexOf(marker);
+  while (at >= 0) {
+    if (isRealBegin(text, at, marker.length)) return at + marker.length;
+    at = text.indexOf(marker, at + 1);
+  }
+  return 0;
+}
+
+/** Largest preamble we confirm with the parser (its cost is about 8 µs per character). */
+const PREAMBLE_PARSE_LIMIT = 200_000;
+
+function isRealBegin(text: string, at: number, length: number): boolean {
+  if (at > PREAMBLE_PARSE_LIMIT) return !lineHasCommentBefore(text, at);
+  let nodes: LatexNode[];
+  try {
+    nodes = parseLatexNodes(text.slice(0, at + length));
+  } catch {
+    return !lineHasCommentBefore(text, at);
+  }
+  const walk: SpanWalk = { text, shift: 0, documentEnd: text.length, regions: [], problems: [] };
+  const search = (list: LatexNode[]): boolean =>
+    list.some(
+      (node) =>
+        (node.type === 'macro' && node.content === 'begin' && startOf(walk, node) === at) ||
+        ((node.type === 'group' || node.type === 'environment') && Array.isArray(node.content) && search(node.content)),
+    );
+  return search(nodes);
+}
+
+/** True when an unescaped `%` precedes `at` on its line. */
+function lineHasCommentBefore(text: string, at: number): boolean {
+  let i = at - 1;
+  while (i >= 0 && text[i] !== '\n' && text[i] !== '\r') i--;
+  let backslashes = 0;
+  for (let j = i + 1; j < at; j++) {
+    if (text[j] === '%' && backslashes % 2 === 0) return true;
+    backslashes = text[j] === '\\' ? backslashes + 1 : 0;
+  }
+  return false;
+}
