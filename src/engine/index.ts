@@ -12,3 +12,5 @@ export * from './spectrum';
 export * from './roots';
 export * from './numberfield';
 export * from './kpoly';
+export * from './multivariate';
+export * from './symbolic';
