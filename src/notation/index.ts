@@ -1,0 +1,10 @@
+/**
+ * The notation layer's public surface: LaTeX math and notary-block JSON matrices → expression
+ * trees with exact source offsets; statement splitting; printing back to LaTeX and plain text.
+ * It knows nothing of documents, the engine or editors.
+ */
+export type * from './ast';
+export { splitStatements } from './statements';
+export { parseNotaryLine, type NotaryLine } from './notary-line';
+export { parseMathExpression, type ParsedExpression } from './parse';
+export { symbolKey } from './symbols';
