@@ -21,10 +21,10 @@ import { Poly } from './poly';
 import { QQ, type Rational } from './rational';
 import { characteristicPolynomial } from './charpoly';
 import { factorOverQ } from './factor';
-import { type EigenField, quadraticConjugate, quadraticRootIn, rationalEigenField, scaleByRational } from './jordan-fields';
+import { type EigenField, mulRationalMatrixVector, quadraticConjugate, quadraticRootIn, rationalEigenField, scaleByRational } from './jordan-fields';
 import { eigenFieldFor } from './jordan-numberfield';
 import { eigenJordan } from './jordan-chains';
-import { type Rows, equalRows, mulRows, mulVector, rankRows } from './jordan-linear';
+import { type Rows, equalRows, mulRows, rankRows } from './jordan-linear';
 
 /** The Jordan data shared by the conjugate roots of one irreducible factor. */
 export interface JordanFactorBlock<T = unknown> {
@@ -140,7 +140,8 @@ export function jordanForFactor<T>(
   const X = columnsToRows(columns, n);
   const J = jordanMatrix(F, K.alpha, sizes);
   // Certificate: A X = X J over K, and the columns are independent.
-  const AX = columns.map((c) => mulVector(F, rowsIn(K, a), c));
+  const aRows = a.toRows();
+  const AX = columns.map((c) => mulRationalMatrixVector(K, aRows, c));
   const XJ = mulRows(F, X, J, budget);
   if (!equalRows(F, columnsToRows(AX, n), XJ)) throw new DomainError('internal check failed: A·X ≠ X·J for a factor');
   const independent = columns.length === 1 ? columns[0].some((x) => !F.isZero(x)) : rankRows(F, X, budget) === multiplicity;
