@@ -3,7 +3,8 @@
  * top to bottom and decides every claim. The one entry point of the core.
  */
 import { mathSource, scanDocument, type MathRegion } from '../document/index';
-import { parseNotaryLine, splitStatements, toPlainText, type Statement } from '../notation/index';
+import { parseNotaryLine, splitStatements, type Statement } from '../notation/index';
+import { plainText } from './plain';
 import type { Checker, CheckOptions, DecomposeResult, MatrixDescription } from './api';
 import { processStatement, type StatementContext } from './claims';
 import { describeAt, decompose } from './describe';
@@ -39,13 +40,14 @@ export function readStatements(text: string, language: DocumentLanguage, config:
     if (region.kind === 'align' && region.delimiter === 'env' && !config.regions.environments) continue;
     if (region.kind === 'notary') {
       for (const line of region.lines ?? []) {
-        const parsed = parseNotaryLine(text, line.start, line.end);
+        const parsed = parseNotaryLine(text.slice(line.start, line.end), line.start);
         for (const p of parsed.problems) problems.push({ start: p.start, end: p.end, code: p.code, message: p.message });
         for (const statement of parsed.statements) statements.push({ statement, region });
       }
       continue;
     }
-    const source = mathSource(text, region);
+    // The splitter reads the whole text at absolute offsets; blank skipped markup only when there is some.
+    const source = region.skips.length ? text.slice(0, region.contentStart) + mathSource(text, region) + text.slice(region.contentEnd) : text;
     const kind = region.kind === 'align' ? 'align' : region.kind === 'display' ? 'display' : 'inline';
     const split = splitStatements(source, { start: region.contentStart, end: region.contentEnd, kind });
     for (const p of split.problems) problems.push({ start: p.start, end: p.end, code: p.code, message: p.message });
@@ -63,7 +65,7 @@ export function createChecker(parts: CheckerParts = {}): Checker {
     const isCancelled = options.isCancelled ?? (() => false);
     const { statements, problems } = readStatements(text, language, config);
     const env = new Environment();
-    const ctx: StatementContext = { text, env, config, isCancelled, plain: (e) => toPlainText(e, text) };
+    const ctx: StatementContext = { text, env, config, isCancelled, plain: (e) => plainText(e, text) };
     const claims: ClaimResult[] = [];
     const summaries = new Map<MathRegion, RegionSummary & { holds: number; fails: number; unchecked: number }>();
     for (const { statement, region } of statements) {

@@ -3,7 +3,7 @@
  * binds a name; a claim involving a matrix is decided exactly; prose among scalars is left alone.
  */
 import { Budget } from '../engine/index';
-import type { Expr, Link, Statement } from '../notation/index';
+import type { Expr, Link, MatrixEnvironment, Statement } from '../notation/index';
 import { compareValues, distinctScalars } from './compare';
 import type { Environment } from './environment';
 import { displayName, evaluate, type EvalContext } from './evaluate';
@@ -86,7 +86,7 @@ function tryDefinition(key: string, nameStart: number, nameEnd: number, link: Li
     return result(link, ctx, 'unchecked', `definition.unreadable`, `${displayName(key)} could not be read: ${error.message}`, related(ec));
   }
   if (value.kind !== 'matrix') return 'not-a-matrix';
-  let environment;
+  let environment: MatrixEnvironment | undefined;
   walk(link.right, (n) => {
     if (n.kind === 'matrix' && !environment) environment = n.environment;
   });
@@ -208,7 +208,8 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
       return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} ≈ ${claimedPlain} holds (exact value ${exactText})`, related(ec), { caution });
     }
   } else if (comparison.equal) {
-    return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} = ${claimedPlain} holds`, related(ec), { caution });
+    const said = claimedPlain.length <= 40 ? `${computedPlain} = ${claimedPlain} holds` : `${computedPlain} is as written`;
+    return result(link, ctx, 'holds', 'claim.holds', said, related(ec), { caution });
   } else if (comparison.withinWrittenPrecision) {
     return result(
       link,

@@ -35,7 +35,7 @@ function asMatrixLike(v: Value, shapeOf: Matrix<Scalar>): Matrix<Scalar> | undef
   if (v.kind === 'matrix') return v.value;
   if (v.kind === 'identity') {
     if (shapeOf.rows !== shapeOf.cols) return undefined;
-    return Matrix.identity(SCALAR, shapeOf.rows);
+    return Matrix.build(SCALAR, shapeOf.rows, shapeOf.rows, (i, j) => (i === j ? v.factor : SCALAR.zero));
   }
   if (v.kind === 'scalar' && SCALAR.isZero(v.value)) return Matrix.zero(SCALAR, shapeOf.rows, shapeOf.cols);
   return undefined;
@@ -52,7 +52,7 @@ export function compareValues(computed: Value, claimed: Value, places: (index: n
     const p = places(0);
     return { equal: false, withinWrittenPrecision: p !== undefined && roundsTo(computed.value, claimed.value, p) };
   }
-  if (computed.kind === 'identity' && claimed.kind === 'identity') return { equal: true, withinWrittenPrecision: false };
+  if (computed.kind === 'identity' && claimed.kind === 'identity') return { equal: SCALAR.equals(computed.factor, claimed.factor), withinWrittenPrecision: false };
   const reference = computed.kind === 'matrix' ? computed.value : claimed.kind === 'matrix' ? claimed.value : undefined;
   if (!reference) throw new Undecidable('unchecked.unsupported', 'these values cannot be compared');
   const a = asMatrixLike(computed, reference);

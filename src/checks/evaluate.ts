@@ -94,7 +94,7 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
     case 'constant':
       throw new Undecidable('unchecked.unsupported', `the constant ${expr.text} is not supported here yet`);
     case 'identity': {
-      if (!expr.size) return { kind: 'identity' };
+      if (!expr.size) return { kind: 'identity', factor: SCALAR.one };
       const n = integerOf(evaluateScalar(expr.size, ctx), 'the size of I');
       if (n < 1 || n > ctx.maxMatrixSize * 4) throw new Undecidable('unchecked.budget', `I_${n} is over the size budget`);
       return { kind: 'matrix', value: Matrix.identity(SCALAR, n) };

@@ -2,7 +2,8 @@
  * Finding the matrix a hover or command is about, and reading a single matrix for `decompose`.
  */
 import { Budget, Matrix, Rational } from '../engine/index';
-import { parseNotaryLine, splitStatements, toPlainText, type Expr, type Statement } from '../notation/index';
+import { parseNotaryLine, splitStatements, type Expr, type Statement } from '../notation/index';
+import { plainText } from './plain';
 import { readStatements } from './checker';
 import { processStatement, type StatementContext } from './claims';
 import { Environment } from './environment';
@@ -41,7 +42,7 @@ function nodeAt(statement: Statement, offset: number): Expr | undefined {
 export function walkStatementsTo(text: string, language: DocumentLanguage, offset: number, config: CheckerConfig): LocatedMatrix | undefined {
   const { statements } = readStatements(text, language, config);
   const env = new Environment();
-  const ctx: StatementContext = { text, env, config, isCancelled: () => false, plain: (e) => toPlainText(e, text), definitionsOnly: true };
+  const ctx: StatementContext = { text, env, config, isCancelled: () => false, plain: (e) => plainText(e, text), definitionsOnly: true };
   for (const { statement } of statements) {
     if (statement.start > offset) break;
     processStatement(statement, ctx);
@@ -71,7 +72,7 @@ export function parseMatrixSource(source: string, config: CheckerConfig): { ok: 
   if (!trimmed) return { ok: false, error: 'no matrix given' };
   const text = `M = ${trimmed}`;
   const parsed = trimmed.startsWith('[')
-    ? parseNotaryLine(text, 0, text.length)
+    ? parseNotaryLine(text, 0)
     : splitStatements(text, { start: 0, end: text.length, kind: 'display' });
   const problem = parsed.problems[0];
   if (problem) return { ok: false, error: `cannot read the matrix at column ${Math.max(1, problem.start - 3)}: ${problem.message}` };

@@ -25,10 +25,6 @@ export function fromRationalMatrix(m: Matrix<Rational>): Matrix<Scalar> {
   return Matrix.fromEntries(SCALAR, m.rows, m.cols, m.entries.map((r) => num(r)));
 }
 
-function sizedIdentity(n: number): Matrix<Scalar> {
-  return Matrix.identity(SCALAR, n);
-}
-
 function requireSameShape(a: Matrix<Scalar>, b: Matrix<Scalar>, op: string): void {
   if (a.rows !== b.rows || a.cols !== b.cols) {
     throw new Undecidable('unchecked.size-mismatch', `cannot ${op} a ${shapeText(a)} and a ${shapeText(b)} matrix`);
@@ -42,8 +38,8 @@ function requireSquare(m: Matrix<Scalar>, what: string): number {
 
 /** Brings an unsized identity to the size of the other operand. */
 function fit(a: Value, b: Value): [Value, Value] {
-  if (a.kind === 'identity' && b.kind === 'matrix') return [{ kind: 'matrix', value: sizedIdentity(requireSquare(b.value, 'I')) }, b];
-  if (b.kind === 'identity' && a.kind === 'matrix') return [a, { kind: 'matrix', value: sizedIdentity(requireSquare(a.value, 'I')) }];
+  if (a.kind === 'identity' && b.kind === 'matrix') return [{ kind: 'matrix', value: scalarTimesIdentity(a.factor, requireSquare(b.value, 'I')) }, b];
+  if (b.kind === 'identity' && a.kind === 'matrix') return [a, { kind: 'matrix', value: scalarTimesIdentity(b.factor, requireSquare(a.value, 'I')) }];
   return [a, b];
 }
 
@@ -61,7 +57,7 @@ export function add(a: Value, b: Value): Value {
   }
   if (a.kind === 'matrix' && b.kind === 'scalar') return add(a, { kind: 'matrix', value: scalarTimesIdentity(b.value, requireSquare(a.value, 'adding a number')) });
   if (a.kind === 'scalar' && b.kind === 'matrix') return add({ kind: 'matrix', value: scalarTimesIdentity(a.value, requireSquare(b.value, 'adding a number')) }, b);
-  if (a.kind === 'identity' && b.kind === 'identity') return { kind: 'identity' };
+  if (a.kind === 'identity' && b.kind === 'identity') return { kind: 'identity', factor: SCALAR.add(a.factor, b.factor) };
   throw new Undecidable('unchecked.unsupported', 'these two values cannot be added');
 }
 
@@ -69,6 +65,7 @@ export function add(a: Value, b: Value): Value {
 export function negate(a: Value): Value {
   if (a.kind === 'scalar') return scalarValue(SCALAR.neg(a.value));
   if (a.kind === 'matrix') return { kind: 'matrix', value: a.value.neg() };
+  if (a.kind === 'identity') return { kind: 'identity', factor: SCALAR.neg(a.factor) };
   throw new Undecidable('unchecked.unsupported', 'this value cannot be negated');
 }
 
@@ -80,8 +77,9 @@ export function subtract(a: Value, b: Value): Value {
 /** a·b: scalar products, scalar multiples and matrix products (shapes checked). */
 export function multiply(a: Value, b: Value, budget: Budget): Value {
   [a, b] = fit(a, b);
-  if (a.kind === 'identity') return b;
-  if (b.kind === 'identity') return a;
+  if (a.kind === 'identity' && b.kind === 'identity') return { kind: 'identity', factor: SCALAR.mul(a.factor, b.factor) };
+  if (a.kind === 'identity' && b.kind === 'scalar') return { kind: 'identity', factor: SCALAR.mul(a.factor, b.value) };
+  if (b.kind === 'identity' && a.kind === 'scalar') return { kind: 'identity', factor: SCALAR.mul(a.value, b.factor) };
   if (a.kind === 'scalar' && b.kind === 'scalar') return scalarValue(SCALAR.mul(a.value, b.value));
   if (a.kind === 'scalar' && b.kind === 'matrix') return { kind: 'matrix', value: b.value.scale(a.value) };
   if (a.kind === 'matrix' && b.kind === 'scalar') return { kind: 'matrix', value: a.value.scale(b.value) };
@@ -103,6 +101,7 @@ export function divide(a: Value, b: Value): Value {
   if (SCALAR.isZero(b.value)) throw new Undecidable('unchecked.division-by-zero', 'the expression divides by zero');
   if (a.kind === 'scalar') return scalarValue(SCALAR.div(a.value, b.value));
   if (a.kind === 'matrix') return { kind: 'matrix', value: a.value.scale(SCALAR.inv(b.value)) };
+  if (a.kind === 'identity') return { kind: 'identity', factor: SCALAR.div(a.factor, b.value) };
   throw new Undecidable('unchecked.unsupported', 'this value cannot be divided');
 }
 
@@ -116,7 +115,10 @@ export function inverseOf(m: Matrix<Scalar>, budget: Budget): Matrix<Scalar> {
 
 /** a^k (negative k inverts). */
 export function power(a: Value, k: number, budget: Budget): Value {
-  if (a.kind === 'identity') return a;
+  if (a.kind === 'identity') {
+    if (k < 0 && SCALAR.isZero(a.factor)) throw new Undecidable('unchecked.singular', 'the zero matrix has no inverse');
+    return { kind: 'identity', factor: powScalar(a.factor, k) };
+  }
   if (a.kind === 'scalar') {
     if (k < 0 && SCALAR.isZero(a.value)) throw new Undecidable('unchecked.division-by-zero', '0 has no negative powers');
     return scalarValue(powScalar(a.value, k));

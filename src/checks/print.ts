@@ -4,7 +4,9 @@
  */
 import type { Matrix, Rational } from '../engine/index';
 import type { MatrixEnvironment } from '../notation/index';
-import { asRational, type Scalar } from './scalar';
+import { asRational, SCALAR, type Scalar } from './scalar';
+
+const SCALAR_IS_ONE = (s: Scalar) => SCALAR.equals(s, SCALAR.one);
 import type { Value } from './values';
 
 /** How to print a value so it reads like the surrounding note. */
@@ -118,7 +120,7 @@ export function valueLatex(v: Value, style: PrintStyle = defaultStyle): string {
     case 'matrix':
       return matrixLatex(v.value, style);
     case 'identity':
-      return 'I';
+      return SCALAR_IS_ONE(v.factor) ? 'I' : `${scalarLatex(v.factor, style)} I`;
     case 'list':
       return `\\{${v.elements.map((e) => scalarLatex(e, style)).join(', ')}\\}`;
   }
@@ -132,7 +134,7 @@ export function valueText(v: Value, style: PrintStyle = defaultStyle): string {
     case 'matrix':
       return matrixText(v.value, style);
     case 'identity':
-      return 'I';
+      return SCALAR_IS_ONE(v.factor) ? 'I' : `${scalarText(v.factor, style)} I`;
     case 'list':
       return `{${v.elements.map((e) => scalarText(e, style)).join(', ')}}`;
   }

@@ -9,8 +9,8 @@ import { SCALAR, type Scalar } from './scalar';
 export type Value =
   | { readonly kind: 'scalar'; readonly value: Scalar }
   | { readonly kind: 'matrix'; readonly value: Matrix<Scalar> }
-  /** `I` without a size: takes the size of whatever it meets. */
-  | { readonly kind: 'identity' }
+  /** `c·I` without a size (c = 1 for a plain `I`): takes the size of whatever it meets. */
+  | { readonly kind: 'identity'; readonly factor: Scalar }
   /** A written list `\{…\}` (eigenvalues), elements in written order, `a \pm b` expanded. */
   | { readonly kind: 'list'; readonly elements: readonly Scalar[] };
 

@@ -4,7 +4,20 @@
  * verdicts come from the language server's `matrixNotary/verdicts` notification.
  */
 import katex from 'katex';
-import type MarkdownIt from 'markdown-it';
+
+/** The part of markdown-it's API the plugin uses (structural, so no type package is needed). */
+interface FenceToken {
+  info: string;
+  content: string;
+}
+type RenderRule = (tokens: FenceToken[], idx: number, options: unknown, env: unknown, self: MarkdownItRenderer) => string;
+interface MarkdownItRenderer {
+  rules: Record<string, RenderRule | undefined>;
+  renderToken(tokens: FenceToken[], idx: number, options: unknown): string;
+}
+interface MarkdownIt {
+  renderer: MarkdownItRenderer;
+}
 
 type Verdict = 'holds' | 'fails' | 'unchecked';
 

@@ -13,7 +13,7 @@ import {
   TextDocumentSyncKind,
   type Diagnostic,
   type InitializeParams,
-} from 'vscode-languageserver';
+} from 'vscode-languageserver/node';
 import { TextDocument } from 'vscode-languageserver-textdocument';
 import type { CheckedDocument, DocumentLanguage } from '../checks/types';
 import { codeActionsFor, FIX_ALL_KIND } from './codeActions';
@@ -95,7 +95,7 @@ function scheduleCheck(document: TextDocument, delayMs: number): void {
           verdicts: reply.result.claims.map((c) => ({ text: c.text, verdict: c.verdict, message: c.message, line: doc.positionAt(c.start).line })),
         };
         void connection.sendNotification(VERDICTS_NOTIFICATION, verdicts);
-      } else if (reply.message !== 'cancelled') {
+      } else if (reply.kind === 'error' && reply.message !== 'cancelled') {
         connection.console.error(`Matrix Notary could not check ${doc.uri}: ${reply.message}`);
       }
       s.resolveReady?.();
@@ -163,7 +163,9 @@ async function describe(uri: string, position: { line: number; character: number
     deadlineMs(),
   );
   const reply = await handle.result;
-  return reply.kind === 'describe' ? { document, description: reply.result } : undefined;
+  if (reply.kind === 'describe') return { document, description: reply.result };
+  if (reply.kind === 'error' && reply.message !== 'cancelled') connection.console.error(`Matrix Notary could not describe: ${reply.message}`);
+  return undefined;
 }
 
 connection.onHover(async (params, token) => {
