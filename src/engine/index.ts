@@ -14,3 +14,5 @@ export * from './numberfield';
 export * from './kpoly';
 export * from './multivariate';
 export * from './symbolic';
+export * from './algebraic';
+export * from './radical';

@@ -85,16 +85,29 @@ export class ComplexRootEnclosure {
     return this.refineToRadius(Rational.of(1n, 2n * 10n ** BigInt(Math.max(0, digits))), budget);
   }
 
-  /** Real part with `digits` decimals, within one unit of the last digit. */
+  /**
+   * Real part with `digits` decimals, correctly rounded: the enclosure is refined until both ends
+   * of its real shadow round alike. A value within 10^-(digits+30) of a rounding boundary (only
+   * possible for special values) is printed from the midpoint, still within one unit.
+   */
   realPartDecimal(digits: number): string {
-    this.refine(digits);
-    return formatDecimal(this.real ? this.real.midpoint() : this.current.re, digits);
+    return this.roundedPart(digits, (d) => (this.real ? [this.real.lo, this.real.hi] : [d.re.sub(d.radius), d.re.add(d.radius)]));
   }
-  /** Imaginary part with `digits` decimals ("0" exactly for real roots). */
+  /** Imaginary part with `digits` decimals, correctly rounded as above ("0" for real roots). */
   imagPartDecimal(digits: number): string {
     if (this.real) return formatDecimal(Rational.ZERO, digits);
-    this.refine(digits);
-    return formatDecimal(this.current.im, digits);
+    return this.roundedPart(digits, (d) => [d.im.sub(d.radius), d.im.add(d.radius)]);
+  }
+
+  private roundedPart(digits: number, shadow: (d: Disk) => [Rational, Rational]): string {
+    for (let extra = 1; extra <= 30; extra += extra < 4 ? 1 : 8) {
+      this.refine(digits + extra);
+      const [lo, hi] = shadow(this.current);
+      const a = formatDecimal(lo, digits);
+      if (a === formatDecimal(hi, digits)) return a;
+    }
+    const [lo, hi] = shadow(this.current);
+    return formatDecimal(lo.add(hi).mul(Rational.of(1, 2)), digits);
   }
   /** "1.41421", "-0.50000 + 0.86603i" or "-0.50000 - 0.86603i". */
   toDecimalString(digits: number): string {

@@ -107,9 +107,17 @@ export class RealRootInterval {
     return this.compare(Rational.ZERO);
   }
 
-  /** Decimal digits after the point; the true value is within one unit of the last digit shown. */
+  /**
+   * Decimal digits after the point, correctly rounded (refined until both ends round alike; a
+   * value within 10^-(digits+30) of a rounding boundary is printed from the midpoint, within one
+   * unit).
+   */
   toDecimalString(digits: number): string {
-    this.refine(digits);
+    for (let extra = 1; extra <= 30; extra += extra < 4 ? 1 : 8) {
+      this.refine(digits + extra);
+      const a = formatDecimal(this.lower, digits);
+      if (a === formatDecimal(this.upper, digits)) return a;
+    }
     return formatDecimal(this.midpoint(), digits);
   }
 }

@@ -1,0 +1,377 @@
+/**
+ * Exact algebraic numbers: a minimal polynomial over Q plus which of its roots (the index into the
+ * certified root list of ./roots, whose enclosures are disjoint). Equality is exact — same minimal
+ * polynomial and same root. Arithmetic follows the resultant method (H. Cohen, A Course in
+ * Computational Algebraic Number Theory, §3.6.2): the minimal polynomial of α ∘ β divides a
+ * resultant built from theirs; it is factored over Q and the root is chosen by interval arithmetic
+ * on the certified enclosures, refined until exactly one root of one factor remains possible.
+ */
+import { BudgetError, DomainError } from './errors';
+import { Rational } from './rational';
+import { Poly } from './poly';
+import { factorOverQ } from './factor';
+import { type ComplexRootEnclosure, complexRootsOfSquareFree } from './roots';
+import { productRootsPoly, sumRootsPoly } from './bivariate';
+import {
+  type Disk, diskAdd, diskConj, diskContains, diskEvalPoly, diskInv, diskMul, diskNeg, disksIntersect, formatDecimal, pointDisk,
+} from './disk';
+import { type RadicalForm, quadraticRadical, radicalToLatex, radicalToString } from './radical';
+import { NumberField } from './numberfield';
+
+/** Certified root lists per minimal polynomial, shared so that root indices stay canonical. */
+const rootCache = new Map<string, ComplexRootEnclosure[]>();
+
+function rootsOfIrreducible(f: Poly): ComplexRootEnclosure[] {
+  const key = f.toString();
+  let roots = rootCache.get(key);
+  if (!roots) {
+    if (rootCache.size > 2000) rootCache.clear();
+    roots = complexRootsOfSquareFree(f.toPrimitiveIntegers());
+    rootCache.set(key, roots);
+  }
+  return roots;
+}
+
+function digitsRadius(digits: number): Rational {
+  return Rational.of(1n, 10n ** BigInt(digits));
+}
+
+/** An exact real or complex algebraic number. */
+export class AlgebraicNumber {
+  private constructor(
+    /** The minimal polynomial over Q, monic. */
+    readonly minimalPolynomial: Poly,
+    /** Index of this root among the certified roots of the minimal polynomial (real first). */
+    readonly rootIndex: number,
+    private readonly rational: Rational | undefined,
+  ) {}
+
+  /** A rational number. */
+  static fromRational(q: Rational): AlgebraicNumber {
+    return new AlgebraicNumber(Poly.fromRationals([q.neg(), Rational.ONE]), 0, q);
+  }
+  static fromInt(n: number | bigint): AlgebraicNumber {
+    return AlgebraicNumber.fromRational(Rational.fromInt(n));
+  }
+  /** The imaginary unit i (root of x² + 1 with positive imaginary part). */
+  static i(): AlgebraicNumber {
+    return AlgebraicNumber.sqrt(Rational.MINUS_ONE);
+  }
+  /** √q: the non-negative root for q ≥ 0, i·√|q| for q < 0; rational when q is a square. */
+  static sqrt(q: Rational): AlgebraicNumber {
+    const form = quadraticRadical(Rational.ZERO, q.neg());
+    if (!form) {
+      // q is 0 or a rational square.
+      const root = Rational.of(isqrtExact(q.num < 0n ? -q.num : q.num), isqrtExact(q.den));
+      return AlgebraicNumber.fromRational(root);
+    }
+    return AlgebraicNumber.fromRadical({ a: Rational.ZERO, b: form.b.abs(), d: form.d });
+  }
+  /** The real n-th root of q (n ≥ 1): the positive root for q > 0, the negative one for q < 0 and odd n. */
+  static nthRoot(q: Rational, n: number): AlgebraicNumber {
+    if (!Number.isInteger(n) || n < 1) throw new DomainError('root order must be a positive integer');
+    if (q.sign() < 0 && n % 2 === 0) throw new DomainError('an even root of a negative number is not real');
+    if (q.isZero() || n === 1) return AlgebraicNumber.fromRational(q);
+    const target = q.sign();
+    const f = Poly.monomial(Rational.ONE, n).sub(Poly.constant(q));
+    for (const { factor } of factorOverQ(f).factors) {
+      const roots = AlgebraicNumber.allRootsOfIrreducible(factor);
+      const real = roots.filter((r) => r.isReal() && r.sign() === target);
+      if (real.length > 0) return real[0];
+    }
+    throw new DomainError('no real root found'); // unreachable: x^n − q has one of that sign
+  }
+  /** a + b√d (d < 0 meaning b√|d|·i). */
+  static fromRadical(r: RadicalForm): AlgebraicNumber {
+    // x² − d is irreducible for square-free d ≠ 1; its root √d (or √|d|·i) is picked by sign.
+    const rootD = AlgebraicNumber.rootNear(Poly.fromInts([-r.d, 0, 1]), r.d < 0n);
+    return rootD.mul(AlgebraicNumber.fromRational(r.b)).add(AlgebraicNumber.fromRational(r.a));
+  }
+  /** √|d|·i (imaginary = true) or +√d for x² − d irreducible. */
+  private static rootNear(f: Poly, imaginary: boolean): AlgebraicNumber {
+    const roots = AlgebraicNumber.allRootsOfIrreducible(f);
+    return roots.find((r) => (imaginary ? r.imagSign() > 0 : r.sign() > 0))!;
+  }
+  /** Root number k (0-based; real roots first, increasing, then complex ones) of an irreducible f. */
+  static rootOf(f: Poly, k: number): AlgebraicNumber {
+    const roots = AlgebraicNumber.allRootsOfIrreducible(f);
+    if (roots.length !== f.degree()) throw new DomainError(`${f.toString()} is not irreducible over Q`);
+    if (!(k >= 0 && k < roots.length)) throw new DomainError(`root index ${k} out of range`);
+    return roots[k];
+  }
+  /** The distinct roots of a non-zero polynomial with their multiplicities. */
+  static rootsOf(p: Poly): { value: AlgebraicNumber; multiplicity: number }[] {
+    const out: { value: AlgebraicNumber; multiplicity: number }[] = [];
+    for (const { factor, multiplicity } of factorOverQ(p).factors) {
+      for (const value of AlgebraicNumber.allRootsOfIrreducible(factor)) out.push({ value, multiplicity });
+    }
+    return out;
+  }
+  private static allRootsOfIrreducible(f: Poly): AlgebraicNumber[] {
+    const g = f.monic();
+    if (g.degree() === 1) return [AlgebraicNumber.fromRational(g.coeff(0).neg())];
+    const { factors } = factorOverQ(g);
+    if (factors.length !== 1 || factors[0].multiplicity !== 1) throw new DomainError(`${g.toString()} is not irreducible over Q`);
+    return rootsOfIrreducible(g).map((_, i) => new AlgebraicNumber(g, i, undefined));
+  }
+
+  /** Degree of the minimal polynomial. */
+  degree(): number {
+    return this.minimalPolynomial.degree();
+  }
+  isRational(): boolean {
+    return this.rational !== undefined;
+  }
+  /** The rational value, or undefined. */
+  toRational(): Rational | undefined {
+    return this.rational;
+  }
+  isZero(): boolean {
+    return this.rational !== undefined && this.rational.isZero();
+  }
+  /** True when the imaginary part is exactly 0. */
+  isReal(): boolean {
+    return this.rational !== undefined || this.enclosure().isReal;
+  }
+  equals(o: AlgebraicNumber): boolean {
+    return this.rootIndex === o.rootIndex && this.minimalPolynomial.equals(o.minimalPolynomial);
+  }
+
+  private enclosure(): ComplexRootEnclosure {
+    return rootsOfIrreducible(this.minimalPolynomial)[this.rootIndex];
+  }
+  /** A disk certified to contain this number, of radius ≤ 10^-digits. */
+  disk(digits = 10): Disk {
+    if (this.rational) return pointDisk(this.rational);
+    return this.enclosure().refineToRadius(digitsRadius(digits)).disk();
+  }
+
+  neg(): AlgebraicNumber {
+    if (this.rational) return AlgebraicNumber.fromRational(this.rational.neg());
+    const f = this.minimalPolynomial.compose(Poly.fromInts([0, -1])).monic();
+    return AlgebraicNumber.pick(f, true, (d) => diskNeg(this.disk(d)));
+  }
+  add(o: AlgebraicNumber): AlgebraicNumber {
+    if (this.rational && o.rational) return AlgebraicNumber.fromRational(this.rational.add(o.rational));
+    if (o.rational) return this.shift(o.rational);
+    if (this.rational) return o.shift(this.rational);
+    return AlgebraicNumber.pick(sumRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => diskAdd(this.disk(d + 1), o.disk(d + 1)));
+  }
+  sub(o: AlgebraicNumber): AlgebraicNumber {
+    return this.add(o.neg());
+  }
+  mul(o: AlgebraicNumber): AlgebraicNumber {
+    if (this.rational && o.rational) return AlgebraicNumber.fromRational(this.rational.mul(o.rational));
+    if (o.rational) return this.scale(o.rational);
+    if (this.rational) return o.scale(this.rational);
+    return AlgebraicNumber.pick(productRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => {
+      const a = this.disk(d + 2);
+      const b = o.disk(d + 2);
+      return diskMul(a, b);
+    });
+  }
+  inv(): AlgebraicNumber {
+    if (this.isZero()) throw new DomainError('division by zero');
+    if (this.rational) return AlgebraicNumber.fromRational(this.rational.inv());
+    const rev = Poly.fromRationals(this.minimalPolynomial.coeffs.slice().reverse()).monic();
+    return AlgebraicNumber.pick(rev, true, (d) => {
+      for (let extra = 0; ; extra += 4) {
+        const inv = diskInv(this.disk(d + extra));
+        if (inv && inv.radius.compare(digitsRadius(d)) <= 0) return inv;
+        if (extra > 4000) throw new BudgetError('inverse enclosure did not converge');
+      }
+    });
+  }
+  div(o: AlgebraicNumber): AlgebraicNumber {
+    return this.mul(o.inv());
+  }
+  /** this^k for an integer k, computed in Q(this) so the degree never grows. */
+  pow(k: number): AlgebraicNumber {
+    if (!Number.isInteger(k)) throw new DomainError('algebraic powers need an integer exponent');
+    if (k < 0) return this.inv().pow(-k);
+    if (this.rational) return AlgebraicNumber.fromRational(this.rational.pow(k));
+    return this.polynomialIn(Poly.monomial(Rational.ONE, k));
+  }
+  /** a(this) for a rational polynomial a, computed in the field Q(this). */
+  polynomialIn(a: Poly): AlgebraicNumber {
+    if (this.rational) return AlgebraicNumber.fromRational(a.eval(this.rational));
+    const K = new NumberField(this.minimalPolynomial, { trustIrreducible: true });
+    const element = K.element(a);
+    if (element.isConstant()) return AlgebraicNumber.fromRational(element.coeff(0));
+    return AlgebraicNumber.pick(K.minimalPolynomial(element), true, (d) => {
+      for (let extra = 2; ; extra += 4) {
+        const disk = diskEvalPoly(element.coeffs, this.disk(d + extra));
+        if (disk.radius.compare(digitsRadius(d)) <= 0) return disk;
+        if (extra > 4000) throw new BudgetError('enclosure did not converge');
+      }
+    });
+  }
+  /** The complex conjugate. */
+  conj(): AlgebraicNumber {
+    if (this.isReal()) return this;
+    return AlgebraicNumber.pick(this.minimalPolynomial, true, (d) => diskConj(this.disk(d)));
+  }
+  /** Real part (α + ᾱ)/2. */
+  re(): AlgebraicNumber {
+    if (this.isReal()) return this;
+    return this.add(this.conj()).scale(Rational.of(1, 2));
+  }
+  /** Imaginary part (α − ᾱ)/(2i), a real algebraic number. */
+  im(): AlgebraicNumber {
+    if (this.isReal()) return AlgebraicNumber.fromInt(0);
+    return this.sub(this.conj()).mul(AlgebraicNumber.i()).scale(Rational.of(-1, 2));
+  }
+  /** |α|² = α·ᾱ. */
+  absSquared(): AlgebraicNumber {
+    return this.isReal() ? this.mul(this) : this.mul(this.conj());
+  }
+
+  private shift(q: Rational): AlgebraicNumber {
+    const f = this.minimalPolynomial.compose(Poly.fromRationals([q.neg(), Rational.ONE]));
+    return AlgebraicNumber.pick(f, true, (d) => diskAdd(this.disk(d), pointDisk(q)));
+  }
+  private scale(q: Rational): AlgebraicNumber {
+    if (q.isZero()) return AlgebraicNumber.fromInt(0);
+    const f = this.minimalPolynomial.compose(Poly.fromRationals([Rational.ZERO, q.inv()])).monic();
+    return AlgebraicNumber.pick(f, true, (d) => {
+      const extra = Math.max(0, q.abs().num.toString().length - q.abs().den.toString().length + 1);
+      const disk = this.disk(d + extra);
+      return { re: disk.re.mul(q), im: disk.im.mul(q), radius: disk.radius.mul(q.abs()) };
+    });
+  }
+
+  /**
+   * The root of `candidate` (whose roots include the true value) lying in enclose(d) for every d.
+   * Refines until exactly one root of one irreducible factor meets the enclosure.
+   */
+  private static pick(candidate: Poly, irreducible: boolean, enclose: (digits: number) => Disk): AlgebraicNumber {
+    const factors = irreducible ? [candidate.monic()] : factorOverQ(candidate).factors.map((f) => f.factor);
+    const options = factors.flatMap((f) => AlgebraicNumber.allRootsOfIrreducibleTrusted(f));
+    if (options.length === 1) return options[0];
+    for (let digits = 8; digits < 5000; digits = Math.ceil(digits * 1.6)) {
+      const target = enclose(digits);
+      const meeting = options.filter((r) => (r.rational ? diskContains(target, r.rational) : disksIntersect(target, r.disk(digits))));
+      if (meeting.length === 1) return meeting[0];
+      if (meeting.length === 0) throw new DomainError('internal: no candidate root meets the enclosure');
+    }
+    throw new BudgetError('root identification did not converge');
+  }
+  private static allRootsOfIrreducibleTrusted(f: Poly): AlgebraicNumber[] {
+    if (f.degree() === 1) return [AlgebraicNumber.fromRational(f.coeff(0).neg().div(f.coeff(1)))];
+    return rootsOfIrreducible(f).map((_, i) => new AlgebraicNumber(f, i, undefined));
+  }
+
+  /** The certified enclosures of all roots of the minimal polynomial (this one at rootIndex). */
+  conjugateEnclosures(): ComplexRootEnclosure[] {
+    return this.rational ? [] : rootsOfIrreducible(this.minimalPolynomial);
+  }
+
+  /**
+   * Exact sign of the real part. Re α = 0 forces α = −ᾱ, hence f(−x) = ±f(x) for the minimal
+   * polynomial f; then −ᾱ is a root of f, and the mirrored disk of α either misses α's disk
+   * (Re α ≠ 0, its sign read off the disk) or meets no other root's disk (so −ᾱ = α).
+   */
+  realPartSign(): -1 | 0 | 1 {
+    if (this.isReal()) return this.sign();
+    const f = this.minimalPolynomial;
+    const mirrored = f.compose(Poly.fromInts([0, -1]));
+    const symmetric = mirrored.equals(f) || mirrored.equals(f.neg());
+    const all = rootsOfIrreducible(f);
+    for (let digits = 4; digits < 5000; digits *= 2) {
+      const d = this.disk(digits);
+      if (d.re.abs().compare(d.radius) > 0) return d.re.sign();
+      if (symmetric) {
+        const m: Disk = { re: d.re.neg(), im: d.im, radius: d.radius };
+        const others = all.filter((r, i) => i !== this.rootIndex && disksIntersect(m, r.refineToRadius(digitsRadius(digits)).disk()));
+        if (others.length === 0 && disksIntersect(m, d)) return 0;
+      }
+    }
+    throw new BudgetError('the sign of the real part could not be decided');
+  }
+
+  /**
+   * Exact comparison of |α| with 1. |α| = 1 forces 1/ᾱ = α, hence the minimal polynomial is
+   * self-reciprocal up to sign; then 1/ᾱ is a root and the inverted disk identifies it as above.
+   */
+  compareAbsWithOne(): -1 | 0 | 1 {
+    if (this.rational) return this.rational.abs().compare(Rational.ONE);
+    const f = this.minimalPolynomial;
+    const reversed = Poly.fromRationals(f.coeffs.slice().reverse());
+    const reciprocal = reversed.equals(f) || reversed.equals(f.neg());
+    const all = rootsOfIrreducible(f);
+    for (let digits = 4; digits < 5000; digits *= 2) {
+      const d = this.disk(digits);
+      const c2 = d.re.mul(d.re).add(d.im.mul(d.im));
+      const inner = Rational.ONE.sub(d.radius);
+      if (inner.sign() > 0 && c2.compare(inner.mul(inner)) < 0) return -1;
+      const outer = Rational.ONE.add(d.radius);
+      if (c2.compare(outer.mul(outer)) > 0) return 1;
+      if (reciprocal) {
+        const m = diskInv(diskConj(d));
+        if (m) {
+          const others = all.filter((r, i) => i !== this.rootIndex && disksIntersect(m, r.refineToRadius(digitsRadius(digits)).disk()));
+          if (others.length === 0 && disksIntersect(m, d)) return 0;
+        }
+      }
+    }
+    throw new BudgetError('|α| against 1 could not be decided');
+  }
+
+  /** a + b√d for degree ≤ 2 (b = 0, d = 1 for rationals is not used: undefined for rationals). */
+  toRadical(): RadicalForm | undefined {
+    if (this.degree() !== 2) return undefined;
+    const form = quadraticRadical(this.minimalPolynomial.coeff(1), this.minimalPolynomial.coeff(0))!;
+    // Which sign: the larger real root, or the root with positive imaginary part, takes "+".
+    const plus = form.d < 0n ? this.imagSign() > 0 : this.enclosure().realInterval!.compare(form.a) > 0;
+    return plus ? form : { ...form, b: form.b.neg() };
+  }
+
+  /** Decimal approximation with `digits` digits after the point, within one unit of the last digit. */
+  approx(digits = 10): string {
+    if (this.rational) return formatDecimal(this.rational, digits);
+    return this.enclosure().toDecimalString(digits);
+  }
+
+  /** "3/4", "510 + 100*sqrt(26)", "-1/2 + sqrt(3)/2*i", or "root of x^3 - 2 ≈ 1.2599210499". */
+  toString(digits = 10): string {
+    if (this.rational) return this.rational.toString();
+    const r = this.toRadical();
+    if (r) return radicalToString(r);
+    return `root of ${this.minimalPolynomial.toString()} ≈ ${this.approx(digits)}`;
+  }
+
+  /** LaTeX: `\\frac{3}{4}`, `510 + 100\\sqrt{26}`, `2i`, or a described root with certified decimals. */
+  toLatex(digits = 10): string {
+    if (this.rational) return this.rational.toLatex();
+    const r = this.toRadical();
+    if (r) return radicalToLatex(r);
+    return `\\text{root of } ${this.minimalPolynomial.toLatex()} \\approx ${this.approx(digits).replace(/i$/, '\\,i')}\\ldots`;
+  }
+
+  /** Exact sign of a real number (DomainError for non-real ones). */
+  sign(): -1 | 0 | 1 {
+    if (this.rational) return this.rational.sign();
+    const interval = this.enclosure().realInterval;
+    if (!interval) throw new DomainError('the sign of a non-real number is not defined');
+    return interval.sign();
+  }
+  /** Exact comparison of two real numbers. */
+  compare(o: AlgebraicNumber): -1 | 0 | 1 {
+    return this.sub(o).sign();
+  }
+  /** Sign of the imaginary part, exact. */
+  imagSign(): -1 | 0 | 1 {
+    if (this.isReal()) return 0;
+    const d = this.enclosure().disk();
+    // Certified non-real disks miss the real axis, so the centre's sign is the root's.
+    return d.im.sign();
+  }
+}
+
+function isqrtExact(n: bigint): bigint {
+  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
+  while (x * x > n) x--;
+  while ((x + 1n) * (x + 1n) <= n) x++;
+  if (x * x !== n) throw new DomainError('not a perfect square');
+  return x;
+}
