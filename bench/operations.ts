@@ -1,0 +1,43 @@
+// The operations `npm run bench` times, each with its SymPy and PARI/GP counterpart. This list is
+// the hook for later engine parts (Jordan form, exponential): add an entry here (or push onto
+// BENCH_OPERATIONS from a module imported below) and the bench runs it on every matrix, against
+// whichever references it names.
+import { Matrix } from '../src/engine/matrix';
+import { characteristicPolynomial, determinant } from '../src/engine/charpoly';
+import { factorOverQ } from '../src/engine/factor';
+import { spectrum } from '../src/engine/spectrum';
+
+/** One timed operation. The reference snippets are our own fixed code, never document text. */
+export interface BenchOperation {
+  /** Short stable name, used in the report and the final JSON ("charpoly+factor"). */
+  readonly name: string;
+  /** Our engine on an integer matrix. */
+  readonly ours: (a: Matrix<bigint>) => unknown;
+  /** Body of a python function of `A` (a sympy Matrix; `sp` and the symbol `x` are in scope). */
+  readonly sympy?: string;
+  /** A PARI/GP expression in the matrix `A`. */
+  readonly pari?: string;
+}
+
+/** The operations timed on every bench matrix. */
+export const BENCH_OPERATIONS: BenchOperation[] = [
+  {
+    name: 'charpoly+factor',
+    ours: (a) => factorOverQ(characteristicPolynomial(a)),
+    sympy: 'return sp.factor_list(A.charpoly(x).as_expr(), x)',
+    pari: 'factor(charpoly(A))',
+  },
+  {
+    name: 'det',
+    ours: (a) => determinant(a),
+    sympy: 'return A.det()',
+    pari: 'matdet(A)',
+  },
+  {
+    // Our spectrum gives factors, multiplicities, Jordan block sizes and the minimal polynomial;
+    // PARI's nearest equivalent is the factored charpoly plus the invariant factors.
+    name: 'spectrum',
+    ours: (a) => spectrum(a),
+    pari: '[factor(charpoly(A)), matfrobenius(A, 1)]',
+  },
+];
