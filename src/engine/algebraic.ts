@@ -32,6 +32,19 @@ function rootsOfIrreducible(f: Poly): ComplexRootEnclosure[] {
   return roots;
 }
 
+/**
+ * Largest degree of a resultant the arithmetic will form and factor (products of the operands'
+ * degrees); beyond it the operation is refused up front rather than running for minutes.
+ */
+export const MAX_RESULTANT_DEGREE = 100;
+
+function checkResultantSize(a: Poly, b: Poly): void {
+  const d = a.degree() * b.degree();
+  if (d > MAX_RESULTANT_DEGREE) {
+    throw new BudgetError(`algebraic arithmetic on degrees ${a.degree()} and ${b.degree()} needs a degree-${d} resultant (limit ${MAX_RESULTANT_DEGREE})`);
+  }
+}
+
 function digitsRadius(digits: number): Rational {
   return Rational.of(1n, 10n ** BigInt(digits));
 }
@@ -99,6 +112,13 @@ export class AlgebraicNumber {
     if (!(k >= 0 && k < roots.length)) throw new DomainError(`root index ${k} out of range`);
     return roots[k];
   }
+  /**
+   * The value of a number-field element a(α) under the embedding that sends α to root number
+   * `rootIndex` of the field's defining polynomial (the order of K.embeddings()).
+   */
+  static fromFieldElement(K: NumberField, a: Poly, rootIndex: number): AlgebraicNumber {
+    return AlgebraicNumber.rootOf(K.modulus, rootIndex).polynomialIn(a);
+  }
   /** The distinct roots of a non-zero polynomial with their multiplicities. */
   static rootsOf(p: Poly): { value: AlgebraicNumber; multiplicity: number }[] {
     const out: { value: AlgebraicNumber; multiplicity: number }[] = [];
@@ -155,6 +175,8 @@ export class AlgebraicNumber {
     if (this.rational && o.rational) return AlgebraicNumber.fromRational(this.rational.add(o.rational));
     if (o.rational) return this.shift(o.rational);
     if (this.rational) return o.shift(this.rational);
+    if (this.equals(o)) return this.scale(Rational.fromInt(2));
+    checkResultantSize(this.minimalPolynomial, o.minimalPolynomial);
     return AlgebraicNumber.pick(sumRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => diskAdd(this.disk(d + 1), o.disk(d + 1)));
   }
   sub(o: AlgebraicNumber): AlgebraicNumber {
@@ -164,6 +186,8 @@ export class AlgebraicNumber {
     if (this.rational && o.rational) return AlgebraicNumber.fromRational(this.rational.mul(o.rational));
     if (o.rational) return this.scale(o.rational);
     if (this.rational) return o.scale(this.rational);
+    if (this.equals(o)) return this.pow(2);
+    checkResultantSize(this.minimalPolynomial, o.minimalPolynomial);
     return AlgebraicNumber.pick(productRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => {
       const a = this.disk(d + 2);
       const b = o.disk(d + 2);

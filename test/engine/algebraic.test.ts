@@ -103,3 +103,16 @@ test('cube roots, nth roots and a degree-3 description', () => {
   assert.equal(c.compare(A.sqrt(q(2))), -1);
   assert.equal(A.nthRoot(q(3), 3).compare(A.sqrt(q(2))), 1);
 });
+
+test('number-field elements map to algebraic numbers under each embedding; size limits are typed errors', async () => {
+  const { NumberField } = await import('../../src/engine/numberfield');
+  const K = new NumberField(P(-2, 0, 1));
+  // 3 + 2α under α ↦ −√2 and α ↦ +√2 (roots in increasing order).
+  const values = [0, 1].map((k) => A.fromFieldElement(K, P(3, 2), k));
+  assert.equal(values[0].toLatex(), '3 - 2\\sqrt{2}');
+  assert.equal(values[1].toLatex(), '3 + 2\\sqrt{2}');
+  // Degree 11 × 11 = 121 exceeds the resultant limit: refused with a BudgetError, not a hang.
+  const a = A.rootOf(P(-2, ...new Array(10).fill(0), 1), 0);
+  const b = A.rootOf(P(-3, ...new Array(10).fill(0), 1), 0);
+  assert.throws(() => a.add(b), /resultant/);
+});

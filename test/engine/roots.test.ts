@@ -9,6 +9,7 @@ import { Rational } from '../../src/engine/rational';
 import { diskContains, formatDecimal } from '../../src/engine/disk';
 import { squareFreePart } from '../../src/engine/poly';
 import { readFileSync, existsSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
 
 const benchPath = '../shared/bench/matrices.json';
 
@@ -109,4 +110,56 @@ test('every bench characteristic polynomial: as many certified distinct roots as
     const want = sf.coeff(distinct - 1).neg();
     assert.ok(sum.sub(want).abs().compare(Rational.of(1, 10n ** 15n)) < 0, e.name);
   }
+});
+
+test('close complex pairs: (x^2 + 1)(10^8 x^2 + 10^8 + 1) gives four separated disks', () => {
+  // An invented cluster: ±i and ±i·√(1 + 10^-8), 5·10^-9 apart.
+  const p = P(1, 0, 1).mul(Poly.fromInts([10n ** 8n + 1n, 0n, 10n ** 8n]));
+  const roots = complexRoots(p);
+  assert.equal(roots.length, 4);
+  assert.deepEqual(roots.map((r) => r.imagPartDecimal(12)).sort(), ['-1.000000005000', '-1.000000000000', '1.000000000000', '1.000000005000'].sort());
+});
+
+const sympyMissing = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
+  ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)'
+  : false;
+
+test('root decimals agree with SymPy nroots at 30 digits', { skip: sympyMissing }, () => {
+  // Oracle: SymPy (Debian python3-sympy) Poly.nroots(n=30) on seeded random integer polynomials.
+  const cases: Poly[] = [];
+  let s = 12345;
+  const rnd = () => ((s = (Math.imul(s, 1103515245) + 12345) >>> 0) / 2 ** 32);
+  for (let k = 0; k < 6; k++) {
+    const deg = 5 + k;
+    const c = Array.from({ length: deg + 1 }, () => Math.floor(rnd() * 41) - 20);
+    c[deg] = 1 + Math.floor(rnd() * 5);
+    c[0] = c[0] === 0 ? 7 : c[0];
+    cases.push(Poly.fromInts(c));
+  }
+  const script = [
+    'import sys, json',
+    'from sympy import Poly, symbols',
+    'x = symbols("x")',
+    'out = []',
+    'for line in sys.stdin:',
+    '    c = [int(v) for v in json.loads(line)]',
+    '    rs = Poly(c, x).nroots(n=30, maxsteps=500)',
+    '    out.append([[str(r.as_real_imag()[0]), str(r.as_real_imag()[1])] for r in rs])',
+    'print(json.dumps(out))',
+  ].join('\n');
+  const input = cases.map((p) => JSON.stringify(p.coeffs.map((c) => c.toString()).reverse())).join('\n');
+  const run = spawnSync('python3', ['-c', script], { input, encoding: 'utf8' });
+  assert.equal(run.status, 0, run.stderr);
+  const theirs = JSON.parse(run.stdout) as [string, string][][];
+  const tolerance = Rational.of(1, 10n ** 24n);
+  cases.forEach((p, i) => {
+    const mine = complexRoots(p).map((r) => [Rational.parse(r.realPartDecimal(28))!, Rational.parse(r.imagPartDecimal(28))!]);
+    assert.equal(mine.length, theirs[i].length, `case ${i}`);
+    for (const [re, im] of theirs[i]) {
+      const a = Rational.parse(re)!;
+      const b = Rational.parse(im)!;
+      const close = mine.filter(([x, y]) => x.sub(a).abs().compare(tolerance) < 0 && y.sub(b).abs().compare(tolerance) < 0);
+      assert.equal(close.length, 1, `case ${i}: ${p.toString()} root ${re} + ${im}i`);
+    }
+  });
 });
