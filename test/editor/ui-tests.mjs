@@ -5,7 +5,7 @@
 // the Problems count, the hover on K, a quick fix by keyboard and save, and the Markdown preview.
 // Screenshots (PNG, 1280×800) go to test-results/editor/screenshots/ and, with
 // --update-screenshots, to media/screenshots/ (committed; the README shows them).
-import { copyFileSync, mkdirSync, readFileSync } from 'node:fs';
+import { copyFileSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { RESULTS_DIR, ROOT, startEditor, waitFor, waitForWorkbench } from './harness.mjs';
 
@@ -86,6 +86,7 @@ async function screenshot(page, name, saved) {
  */
 export async function runUiTests({ updateScreenshots = false } = {}) {
   const started = Date.now();
+  rmSync(SHOTS, { recursive: true, force: true }); // no stale failure pictures from an earlier run
   const outcomes = [];
   const screenshots = [];
   const timings = {};
@@ -128,6 +129,9 @@ export async function runUiTests({ updateScreenshots = false } = {}) {
         await page.locator('.markers-panel').waitFor();
         await page.locator('.markers-panel .monaco-list-row', { hasText: 'Matrix Notary' }).first().waitFor({ timeout: 30_000 });
         await screenshot(page, '1-diagnostic-and-problems', screenshots);
+        // Ctrl+J hides the panel again: the next screenshots need the height for the hover and preview.
+        await page.keyboard.press('Control+J');
+        await page.locator('.markers-panel').waitFor({ state: 'hidden' });
       },
     ],
     [
@@ -160,7 +164,11 @@ export async function runUiTests({ updateScreenshots = false } = {}) {
         await page.keyboard.press('Control+S');
         await waitFor(() => readFileSync(notePath, 'utf8').includes('$\\det K = 8$'), { message: `${NOTE} saved with det K = 8` });
         const problems = page.locator('[id="status.problems"]');
-        await waitFor(async () => /Errors?: 0\b|No Problems/i.test((await problems.getAttribute('aria-label')) ?? '') || undefined, {
+        // The label lists only non-zero counts ("Warnings: 1", or "No Problems"): no "Errors: N" left.
+        await waitFor(async () => {
+          const label = await problems.getAttribute('aria-label');
+          return label !== null && !/Errors?: [1-9]/.test(label);
+        }, {
           timeoutMs: 30_000,
           message: 'the status bar to count no errors after the fix',
         });
@@ -170,6 +178,9 @@ export async function runUiTests({ updateScreenshots = false } = {}) {
     [
       'the Markdown preview opens to the side and marks the notary block',
       async () => {
+        // Ctrl+B hides the Explorer so the note and its preview share the full width.
+        await page.keyboard.press('Control+B');
+        await page.locator('.explorer-folders-view').waitFor({ state: 'hidden' });
         await page.keyboard.press('Control+Shift+P');
         const input = page.locator('.quick-input-widget input');
         await input.waitFor({ state: 'visible' });
