@@ -198,18 +198,33 @@ export class ComplexRootLocator {
           }));
       fixedAberth(this.poly, this.z, this.bits, 3);
     }
+    const smallEnough = (disks: Disk[]) => !maxRadius || disks.every((d) => d.radius.compare(maxRadius) <= 0);
+    // The last certified set may already be fine enough (refining roots one after another).
+    if (this.disks.length > 0 && smallEnough(this.disks)) return this.disks;
     for (let attempt = 0; attempt < 40; attempt++) {
       budget?.tick(n * n * 8);
       const disks = certifiedDisks(this.poly, this.z, this.bits);
-      if (disks && this.acceptable(disks) && (!maxRadius || disks.every((d) => d.radius.compare(maxRadius) <= 0))) {
+      const acceptable = disks !== undefined && this.acceptable(disks);
+      if (acceptable && smallEnough(disks)) {
         this.disks = disks;
         return disks;
       }
-      const newBits = this.bits * 2;
+      // Separated but too coarse: jump straight to the precision the requested radius needs;
+      // otherwise double it. Aberth converges (at least) quadratically, so log2 of the precision
+      // ratio rounds suffice.
+      let newBits = this.bits * 2;
+      if (acceptable && maxRadius) {
+        let worst = Rational.ZERO;
+        for (const d of disks) if (d.radius.compare(worst) > 0) worst = d.radius;
+        const ratio = worst.div(maxRadius);
+        const gap = ratio.num.toString(2).length - ratio.den.toString(2).length + 1;
+        newBits = Math.max(this.bits + 16, this.bits + gap + 16);
+      }
       const shift = BigInt(newBits - this.bits);
       this.z = this.z.map((a) => ({ re: a.re << shift, im: a.im << shift }));
+      const rounds = Math.ceil(Math.log2(newBits / this.bits)) + 2;
       this.bits = newBits;
-      fixedAberth(this.poly, this.z, this.bits, attempt < 2 ? 4 : 8);
+      fixedAberth(this.poly, this.z, this.bits, rounds);
     }
     throw new BudgetError('complex root certification did not converge');
   }
