@@ -8,7 +8,7 @@ import type { Token } from './tokens';
 import { operatorCommands, operatorWords, relationCommands } from './vocabulary';
 
 /** Deepest nesting the parser follows; deeper groups are skipped with `notation.too-deep`. */
-export const maxNestingDepth = 150;
+export const maxNestingDepth = 100;
 
 /** Token position plus parsing state shared by the parse functions. */
 export class Cursor {

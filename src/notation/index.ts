@@ -8,3 +8,18 @@ export { splitStatements } from './statements';
 export { parseNotaryLine, type NotaryLine } from './notary-line';
 export { parseMathExpression, type ParsedExpression } from './parse';
 export { symbolKey } from './symbols';
+export { childrenOf, walkExpr, someExpr, stripPositions, exprEquals, treeDepth, maxTreeDepth } from './tree';
+export { detectStyle, emptyStyle, type NotationStyle } from './style';
+export { toLatex } from './print-latex';
+export { toPlainText, toPlainTextLines } from './print-text';
+export {
+  formatMatrixLatex,
+  formatMatrixJson,
+  formatMatrixLines,
+  formatMatrixPlainText,
+  formatRational,
+  formatDecimal,
+  bracketsFor,
+  type RationalFormat,
+  type PlainBrackets,
+} from './format';

@@ -9,6 +9,7 @@ import { readJson, type JsonValue } from './json-values';
 import { parseCommaList } from './parse-expr';
 import { splitTokens } from './statements';
 import { shiftMap, tokenize, type OffsetMap } from './tokens';
+import { limitDepth } from './tree';
 
 /** What a notary line is; `statements` is empty for blank and comment lines. */
 export interface NotaryLine {
@@ -72,7 +73,7 @@ function parseSide(tokens: ReturnType<typeof tokenize>['tokens'], problems: Prob
   const c = new Cursor([...tokens, { type: 'eof', value: '', start: last.end, end: last.end }], problems);
   const items = parseCommaList(c);
   if (!c.atEnd()) c.report('notation.unexpected', 'this part of the name is not understood', { start: c.peek().start, end: last.end });
-  return items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end };
+  return limitDepth(items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end }, problems);
 }
 
 /** Turns a JSON array of rows into a matrix expression, reporting shape problems. */
@@ -156,5 +157,5 @@ function latexInString(entry: Extract<JsonValue, { kind: 'string' }>, problems: 
   if (!c.atEnd() || items.length > 1) {
     problems.push({ code: 'notation.unexpected', message: 'a matrix entry must be a single value', start: entry.start, end: entry.end });
   }
-  return items[0]!;
+  return limitDepth(items[0]!, problems);
 }

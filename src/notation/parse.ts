@@ -6,6 +6,7 @@ import type { Expr, Problem } from './ast';
 import { Cursor } from './cursor';
 import { parseCommaList } from './parse-expr';
 import { tokenize } from './tokens';
+import { limitDepth } from './tree';
 
 /** An expression with the problems found while reading it. */
 export interface ParsedExpression {
@@ -25,5 +26,5 @@ export function parseMathExpression(text: string, start = 0, end = text.length):
   const items = parseCommaList(c);
   if (!c.atEnd()) c.report('notation.unexpected', 'this part is not understood', { start: c.peek().start, end: tokens[tokens.length - 1]!.end });
   const expr: Expr = items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end };
-  return { expr, problems };
+  return { expr: limitDepth(expr, problems), problems };
 }

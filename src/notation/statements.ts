@@ -11,6 +11,7 @@ import { parseCommaList } from './parse-expr';
 import { tokenize, type Token } from './tokens';
 import { operatorWords, relationCommands, separatorCommands, sizingClose, sizingOpen } from './vocabulary';
 import { parseNotaryLine } from './notary-line';
+import { limitDepth } from './tree';
 
 /** Environments inside a math region that only arrange lines (`aligned`, `split`, …). */
 const arrangingEnvironments = new Set(['aligned', 'aligned*', 'split', 'gathered', 'alignedat', 'multlined', 'align', 'align*', 'gather', 'gather*', 'equation', 'equation*', 'multline', 'multline*', 'flalign', 'flalign*', 'alignat', 'alignat*', 'eqnarray', 'eqnarray*']);
@@ -176,7 +177,8 @@ function parseChain(tokens: Token[], problems: Problem[]): { terms: Expr[]; rela
   for (let guard = 0; guard <= tokens.length + 1; guard++) {
     if (expectTerm) {
       const items = parseCommaList(c);
-      terms.push(items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end });
+      const side: Expr = items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end };
+      terms.push(limitDepth(side, problems));
     }
     expectTerm = true;
     if (c.atEnd()) break;
