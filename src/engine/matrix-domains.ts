@@ -60,9 +60,23 @@ export function domainLevel(domain: Ring<unknown>): DomainLevel {
   throw new DomainError(`the domain ${domain.name} is not in the supported tower Z < Q < Q(α) < Q(params)`);
 }
 
-/** Two domains are the same when they are one object or share a name above Q (e.g. the same Q(√2)). */
+interface HasModulus {
+  readonly modulus?: { equals(other: unknown): boolean };
+}
+
+/**
+ * Two domains are the same when they are one object, both are the parameter field, or both are
+ * number fields with the same defining polynomial (their `modulus`), whatever the generator's name.
+ */
 export function sameDomain(a: Ring<unknown>, b: Ring<unknown>): boolean {
-  return a === b || (a.name === b.name && domainLevel(a) === domainLevel(b));
+  if (a === b) return true;
+  const la = domainLevel(a);
+  if (la !== domainLevel(b)) return false;
+  if (la === 3) return true;
+  if (la !== 2) return false;
+  const ma = (a as HasModulus).modulus;
+  const mb = (b as HasModulus).modulus;
+  return !!ma && !!mb && ma.equals(mb);
 }
 
 /**

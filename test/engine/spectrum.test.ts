@@ -2,7 +2,9 @@
 // matrix, and identities between charpoly, determinant, trace and the minimal polynomial.
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
-import { Matrix } from '../../src/engine/matrix';
+import { Matrix, unify } from '../../src/engine/matrix';
+import { rank } from '../../src/engine/matrix-elimination';
+import { NumberField } from '../../src/engine/numberfield';
 import { ZZ } from '../../src/engine/matrix-domains';
 import { spectrum } from '../../src/engine/spectrum';
 import { determinant } from '../../src/engine/charpoly';
@@ -96,4 +98,55 @@ test('size limit and non-rational domains are refused up front', () => {
   assert.throws(() => spectrum(Matrix.identity(ZZ, 41)), BudgetError);
   assert.throws(() => spectrum(Matrix.identity(ZZ, 6), undefined, { maxSize: 5 }), BudgetError);
   assert.throws(() => spectrum(Matrix.identity(ZZ, 3).convertTo({ ...QQ, name: 'Q(√2)' }) as never), DomainError);
+});
+
+test('geometric multiplicities agree with n − rank(A − αI) computed over Q(α) = Q[x]/(f)', () => {
+  // The spectrum takes ranks of f(A) over Q; here the same numbers come from elimination over
+  // the number field itself (dim_Q ker f(A) = deg f · dim_K ker(A − αI), common practice).
+  let compared = 0;
+  for (const bench of loadBenchMatrices().filter((b) => b.n <= 12)) {
+    const a = intMatrix(bench.matrix);
+    for (const g of spectrum(a).factors) {
+      if (g.factor.degree() === 1 && g.algebraicMultiplicity === 1) continue;
+      const field = new NumberField(g.factor);
+      const alpha = field.generator;
+      const shifted = a.map(field, (x, i, j) => (i === j ? field.sub(field.fromInt(x), alpha) : field.fromInt(x)));
+      assert.equal(bench.n - rank(shifted), g.geometricMultiplicity, `${bench.name}, factor ${g.factor.toString()}`);
+      compared++;
+    }
+  }
+  assert.ok(compared >= 15);
+});
+
+test('unify: a Q matrix meets a Q(i) matrix; two different number fields do not mix', () => {
+  const gauss = NumberField.gaussian();
+  const i = gauss.generator;
+  const a = Matrix.fromRows(gauss, [[i, gauss.one], [gauss.zero, gauss.neg(i)]]);
+  const q = Matrix.fromRows(QQ, [[Rational.of(1, 2), Rational.ZERO], [Rational.ZERO, Rational.ONE]]);
+  const [ua, uq] = unify(a, q);
+  assert.equal(ua.domain, gauss);
+  const sum = ua.add(uq);
+  assert.ok(gauss.equals(sum.get(0, 0) as never, gauss.add(i, gauss.fromRational(Rational.of(1, 2)))));
+  assert.equal(rank(a.mul(a)), 2); // a² = −I
+  const sqrt2 = new NumberField(Poly.fromInts([-2, 0, 1]), { generatorName: '√2' });
+  assert.throws(() => unify(a, Matrix.identity(sqrt2, 2)), DomainError);
+  const sameAsGauss = new NumberField(Poly.fromInts([1, 0, 1]), { generatorName: 'j' });
+  assert.equal(unify(a, Matrix.identity(sameAsGauss, 2))[1].domain, gauss); // the same field under another name
+});
+
+test('companion matrix of (x − 1)²(x² + 1): eigenvalues are its roots, one Jordan block each (common practice)', () => {
+  // A companion matrix is non-derogatory: its minimal polynomial is its characteristic polynomial.
+  const p = Poly.fromInts([-1, 1]).pow(2).mul(Poly.fromInts([1, 0, 1]));
+  const n = p.degree();
+  const comp = Matrix.build(QQ, n, n, (i, j) => (j === n - 1 ? p.coeff(i).neg() : i === j + 1 ? Rational.ONE : Rational.ZERO));
+  const s = spectrum(comp);
+  assert.ok(s.charpoly.equals(p));
+  assert.ok(s.minimalPolynomial.equals(p));
+  assert.deepEqual(s.factors.map((g) => [g.factor.toString(), g.algebraicMultiplicity, g.geometricMultiplicity]), [
+    [Poly.fromInts([-1, 1]).toString(), 2, 1],
+    [Poly.fromInts([1, 0, 1]).toString(), 1, 1],
+  ]);
+  // det = product and trace = sum of the eigenvalues with multiplicity: 1·1·(i)(−i) = 1, 1 + 1 + i − i = 2
+  assert.equal(s.determinant.toString(), '1');
+  assert.equal(s.trace.toString(), '2');
 });
