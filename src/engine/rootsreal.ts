@@ -75,13 +75,65 @@ export class RealRootInterval {
     }
   }
 
-  /** Narrows the interval to width at most `width`. */
+  /**
+   * Narrows the interval to width at most `width`: Newton's method in fixed point at the needed
+   * precision, accepted only after an exact sign change proves the small interval around the
+   * Newton point holds the root (and it lies inside the isolating interval); otherwise a few
+   * bisections bring the start closer and Newton is tried again.
+   */
   refineToWidth(width: Rational, budget?: Budget): this {
     while (!this.isExact && this.width().compare(width) > 0) {
-      budget?.tick(this.poly.length);
-      this.bisect();
+      budget?.tick(this.poly.length * 8);
+      if (this.width().compare(width.mul(Rational.fromInt(64))) > 0 && this.tryNewton(width)) continue;
+      for (let i = 0; i < 4 && !this.isExact && this.width().compare(width) > 0; i++) this.bisect();
     }
     return this;
+  }
+
+  private tryNewton(width: Rational): boolean {
+    const p = this.poly;
+    const n = p.length - 1;
+    if (n < 2) return false;
+    const bits = Math.max(64, width.den.toString(2).length - width.num.toString(2).length + 8);
+    const B = BigInt(bits);
+    const mid = this.midpoint();
+    let X = (mid.num << B) / mid.den;
+    const dp = derivInt(p);
+    // P(X) = 2^(bits·n) p(X/2^bits) and Q(X) = 2^(bits·(n−1)) p'(X/2^bits), so the Newton step in
+    // units of 2^-bits is P/Q exactly.
+    const homogeneous = (c: IntPoly, x: bigint): bigint => {
+      let acc = 0n;
+      let scale = 1n;
+      for (let i = c.length - 1; i >= 0; i--) {
+        acc = acc * x + c[i] * scale;
+        scale <<= B;
+      }
+      return acc;
+    };
+    for (let iter = 0; iter < 2 * Math.log2(bits) + 8; iter++) {
+      const q = homogeneous(dp, X);
+      if (q === 0n) return false;
+      const step = homogeneous(p, X) / q;
+      X -= step;
+      if (step >= -1n && step <= 1n) break;
+    }
+    const lo = Rational.of(X - 2n, 1n << B);
+    const hi = Rational.of(X + 2n, 1n << B);
+    // Strictly inside: an endpoint of the isolating interval may be a neighbouring rational root.
+    if (lo.compare(this.lower) <= 0 || hi.compare(this.upper) >= 0) return false;
+    const sLo = signAtRational(p, lo.num, lo.den);
+    const sHi = signAtRational(p, hi.num, hi.den);
+    if (sLo === 0 || sHi === 0) {
+      const exact = sLo === 0 ? lo : hi;
+      this.lower = exact;
+      this.upper = exact;
+      return true;
+    }
+    if (sLo === sHi) return false;
+    this.lower = lo;
+    this.upper = hi;
+    this.signRightOfLower = sLo;
+    return true;
   }
 
   /** Narrows the interval to width at most 10^-digits. */
