@@ -6,6 +6,7 @@ import type { Expr, ProductOperator } from './ast';
 import { Cursor, operatorAt, relationAt } from './cursor';
 import { parsePrimary, startsPrimary } from './parse-primary';
 import { interpretSuperscript, parseScriptArgument } from './parse-scripts';
+import { canonicalScriptText, symbolKey } from './symbols';
 
 /** Parses comma-separated expressions (stops at anything that is not `,` between them). */
 export function parseCommaList(c: Cursor): Expr[] {
@@ -113,8 +114,15 @@ export function parsePostfix(c: Cursor): Expr {
       e = { kind: 'factorial', operand: e, start: e.start, end: c.lastEnd() };
     } else if (c.is('_')) {
       c.next();
+      const from = c.pos;
       const script = parseScriptArgument(c);
-      e = { kind: 'indexed', base: e, index: script.expr, start: e.start, end: script.end };
+      if (e.kind === 'symbol' && e.subscript === null) {
+        // `{A}_1` is the name A_1.
+        const subscript = canonicalScriptText(c.tokens.slice(from, c.pos));
+        e = { ...e, subscript, key: symbolKey(e.base, e.decorations, e.primes, subscript), end: script.end };
+      } else {
+        e = { kind: 'indexed', base: e, index: script.expr, start: e.start, end: script.end };
+      }
     } else if (c.is("'")) {
       const t = c.next();
       c.report('notation.unsupported', 'a prime after something that is not a name is not understood', t);

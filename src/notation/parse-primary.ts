@@ -69,6 +69,12 @@ function primary(c: Cursor): Expr {
   if (t.type === 'begin') return parseEnvironment(c);
   if (operatorAt(c, 0) || (t.type === 'command' && t.value === '\\operatorname')) return parseOperator(c);
   if (startsName(c, 0)) return parseName(c);
+  if (t.type === 'text') {
+    // Prose inside a subscript (`A_{\text{cl}}`) names something; elsewhere it was dropped before parsing.
+    c.next();
+    const word = (t.arg ?? '').replace(/\s+/g, '');
+    return { kind: 'symbol', key: `\\text{${word}}`, base: `\\text{${word}}`, subscript: null, decorations: [], primes: 0, start: t.start, end: t.end };
+  }
   if (t.type === 'char') {
     if (t.value === '(' || t.value === '[') return parseDelimited(c);
     if (t.value === '|') return parseDelimited(c);
