@@ -16,8 +16,20 @@ import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, findParagraphBreak, lineEndAt
 import { type LatexNode, environmentName, groupText, parseLatexNodes } from './latex-parse.js';
 import { scanLatexFallback } from './latex-fallback.js';
 
-/** About how many characters one parse covers (rounded up to the next paragraph break). */
-const CHUNK_SIZE = 8000;
+/**
+ * About how many characters one parse covers (rounded up to the next paragraph break). The
+ * grammar memoises every rule at every position, so its cost grows faster than the input: on a
+ * 400 kB math-dense note, chunks of ~1 000 characters scanned at about 3 µs per character,
+ * 8 000 at 5 µs and 20 000 at 11 µs (test/document/measure-scan.ts). One paragraph per parse is
+ * about the best.
+ */
+const CHUNK_SIZE = 1000;
+
+/**
+ * A single paragraph longer than this goes to the local scanner instead of the grammar, which
+ * needs seconds and, near a few megabytes, more memory than a JavaScript array may hold.
+ */
+const LONGEST_PARSED_PARAGRAPH = 100_000;
 
 /** What to do after scanning a span. */
 type SpanNext = { kind: 'done' } | { kind: 'resume'; at: number } | { kind: 'stop' };
@@ -52,6 +64,13 @@ export function scanLatex(text: string): ScanResult {
 /** Parses `[from, to)` and walks it; a parser failure hands the span to the local scanner. */
 function scanSpan(walk: SpanWalk, from: number, to: number): SpanNext {
   const { text } = walk;
+  if (!mayHoldMath(text.slice(from, to))) return { kind: 'done' };
+  if (to - from > LONGEST_PARSED_PARAGRAPH) {
+    const fallback = scanLatexFallback(text, from, to);
+    walk.regions.push(...fallback.regions);
+    walk.problems.push(...fallback.problems);
+    return fallback.stopped ? { kind: 'stop' } : { kind: 'done' };
+  }
   let nodes: LatexNode[];
   try {
     nodes = parseLatexNodes(text.slice(from, to));
@@ -68,6 +87,14 @@ function scanSpan(walk: SpanWalk, from: number, to: number): SpanNext {
     return fallback.stopped ? { kind: 'stop' } : { kind: 'done' };
   }
   return walkNodes(walk, nodes) ?? { kind: 'done' };
+}
+
+/** Markers without which a passage can hold neither math nor a problem we report. */
+const MATH_MARKERS = ['$', '\\(', '\\[', '\\)', '\\]', '\\begin', '\\end', '\\verb'];
+
+/** Prose-only paragraphs are common and the grammar is slow, so they are not parsed at all. */
+function mayHoldMath(passage: string): boolean {
+  return MATH_MARKERS.some((marker) => passage.includes(marker));
 }
 
 const startOf = (walk: SpanWalk, node: LatexNode): number => walk.shift + (node.position?.start.offset ?? 0);
