@@ -125,7 +125,10 @@ function installExitHooks() {
   for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
     process.once(signal, () => {
       console.error(`[editor] ${signal}: closing the editor`);
-      Promise.allSettled([...liveEditors].map((e) => e.close())).finally(() => process.exit(130));
+      Promise.allSettled([...liveEditors].map((e) => e.close())).then((results) => {
+        for (const r of results) if (r.status === 'rejected') console.error(`[editor] closing failed: ${r.reason}`);
+        process.exit(130);
+      });
     });
   }
 }
@@ -250,7 +253,12 @@ export async function startEditor({ name, workspaceSources, extension = 'install
         mkdirSync(RESULTS_DIR, { recursive: true });
         writeFileSync(join(RESULTS_DIR, `${keepLogsAs}-code-server.log`), logText);
       }
-      rmSync(runDir, { recursive: true, force: true });
+      // Retries: a dying extension host may still be writing its logs for a moment.
+      try {
+        rmSync(runDir, { recursive: true, force: true, maxRetries: 10, retryDelay: 200 });
+      } catch (error) {
+        console.error(`[editor] could not remove ${runDir}: ${error.message}`);
+      }
     },
     /** Synchronous last resort for process exit. */
     killNow() {
@@ -270,13 +278,20 @@ export async function startEditor({ name, workspaceSources, extension = 'install
         executablePath: CHROMIUM,
         headless: true,
         viewport: { width: 1280, height: 800 },
+        // Our own signal handlers close the browser and then code-server; Playwright's would exit
+        // the process first and leave code-server's temporary folders behind.
+        handleSIGINT: false,
+        handleSIGTERM: false,
+        handleSIGHUP: false,
         // No sandbox: we run as root in a container; the rest keeps Chromium off the network.
         args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
       });
       const page = browserContext.pages()[0] ?? (await browserContext.newPage());
       if (beforeNavigate) await beforeNavigate(page);
       const params = new URLSearchParams({ folder: workspace, ...query });
-      await page.goto(`${editor.baseUrl}/?${params}`);
+      // The workbench loads hundreds of files: wait for the document only (callers then wait for
+      // what they need), and allow a loaded 2-core machine its time.
+      await page.goto(`${editor.baseUrl}/?${params}`, { waitUntil: 'domcontentloaded', timeout: 120_000 });
       return page;
     },
   };
