@@ -10,7 +10,6 @@ export type { DocumentLanguage, MathRegion, Problem, RegionDelimiter, RegionKind
 export { lineIndex } from './positions.js';
 export type { LineColumn, LineIndex } from './positions.js';
 export { problemCodes } from './common.js';
-export { scanLatexFallback } from './latex-fallback.js';
 
 /**
  * Finds every math region of SPEC §2 in `text`, in document order, and the problems met on the

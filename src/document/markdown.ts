@@ -86,6 +86,8 @@ export function scanMarkdown(text: string): ScanResult {
         containers.push(token);
       } else if (LINK_PART_TYPES.has(type)) {
         linkPartDepth++;
+      } else if (type === 'data' && !open && linkPartDepth === 0 && containers.length > 0) {
+        loneDollarProblems(text, token, problems);
       } else if (type === 'characterEscape' && linkPartDepth === 0 && containers.length > 0) {
         const escaped = text[token.start.offset + 1];
         const container = containers[containers.length - 1];
@@ -132,6 +134,17 @@ export function scanMarkdown(text: string): ScanResult {
 }
 
 /** Turns a collected `$$` block, `$…$` span or fenced block into a region (or nothing). */
+/**
+ * A `$` the math extension left as text is normally a currency sign, but one directly followed by
+ * a backslash (`$\det A = 4` with no closing `$`) is math that was never closed: report it.
+ */
+function loneDollarProblems(text: string, token: Token, problems: Problem[]): void {
+  for (let i = text.indexOf('$', token.start.offset); i >= 0 && i < token.end.offset; i = text.indexOf('$', i + 1)) {
+    if (text[i + 1] !== '\\') continue;
+    problems.push({ code: problemCodes.unterminatedMath, message: '`$` opens math that is never closed in this paragraph', start: i, end: i + 1 });
+  }
+}
+
 function finishConstruct(text: string, open: OpenConstruct, end: number, regions: MathRegion[], problems: Problem[]): void {
   const opening = open.fences[0];
   if (!opening) return;
@@ -162,7 +175,12 @@ function finishConstruct(text: string, open: OpenConstruct, end: number, regions
   const values = open.values;
   const contentStart = values.length > 0 ? values[0].start : opening.end;
   const contentEnd = values.length > 0 ? values[values.length - 1].end : opening.end;
-  const region: MathRegion = { kind, delimiter, start: open.start, end, contentStart, contentEnd, skips: closeRanges(open.skips, contentStart, contentEnd) };
+  // The closing fence line may carry trailing blanks, and an unclosed block ends wherever its
+  // container does; the region ends at the last fence character or the last math.
+  const lastFence = open.fences.length >= 2 ? open.fences[open.fences.length - 1] : undefined;
+  let regionEnd = lastFence ? lastFence.end : Math.max(contentEnd, opening.end);
+  while (lastFence && regionEnd > lastFence.start && (text[regionEnd - 1] === ' ' || text[regionEnd - 1] === '\t')) regionEnd--;
+  const region: MathRegion = { kind, delimiter, start: open.start, end: regionEnd, contentStart, contentEnd, skips: closeRanges(open.skips, contentStart, contentEnd) };
   if (kind === 'notary') region.lines = joinLines(text, values);
   if (open.fences.length < 2) {
     region.unterminated = true;

@@ -49,6 +49,7 @@ const rows: Row[] = [
   { name: 'math in a section title and a group', text: '\\section{On $A$} {\\bf $B$}', regions: [['inline', '$', 'A'], ['inline', '$', 'B']] },
   { name: 'math inside a list', text: '\\begin{itemize}\n\\item $x$\n\n\\item $y$\n\\end{itemize}', regions: [['inline', '$', 'x'], ['inline', '$', 'y']] },
   { name: 'escaped dollar and percent', text: 'costs \\$5 and \\$6, 50\\% of $x$ \\% $y$', regions: [['inline', '$', 'x'], ['inline', '$', 'y']] },
+  { name: 'escaped dollar inside math', text: 'pay $\\$5 + x$ now', regions: [['inline', '$', '\\$5 + x']] },
   { name: '\\\\ before a dollar', text: 'row\\\\$x$', regions: [['inline', '$', 'x']] },
   { name: '\\\\[2pt] is a line break, not display math', text: 'a\\\\[2pt] b $x$', regions: [['inline', '$', 'x']] },
   // Excluded places.

@@ -6,7 +6,8 @@
  */
 import { describe, it } from 'node:test';
 import assert from 'node:assert/strict';
-import { scanDocument, scanLatexFallback } from '../../src/document/index';
+import { scanDocument } from '../../src/document/index';
+import { scanLatexFallback } from '../../src/document/latex-fallback';
 import { assertWellFormed } from './helpers';
 
 /** mulberry32: a small seeded generator so a failure can be replayed (common practice, no source). */
