@@ -11,8 +11,8 @@ import { join, resolve } from 'node:path';
 
 /** The repository root (tests run from it through scripts/run-tests.mjs, but do not rely on it). */
 export const ROOT = resolve(__dirname, '..', '..');
-/** The bundled command line. */
-export const CLI = join(ROOT, 'dist', 'cli.js');
+/** The bundled command line (NOTARY_TEST_CLI may point elsewhere, e.g. at a deliberately broken copy). */
+export const CLI = process.env.NOTARY_TEST_CLI ?? join(ROOT, 'dist', 'cli.js');
 
 /** Fails with a clear message when the bundles are missing (`npm test` builds them first). */
 export function assertBuilt(...bundles: string[]): void {
