@@ -41,7 +41,7 @@ const SMALL_PRIMES: number[] = (() => {
 })();
 
 /** How many good primes are compared before lifting (more prune more, each costs one DDF). */
-const PRIMES_TO_COMPARE = 6;
+const PRIMES_TO_COMPARE = 10;
 
 /** Subset sums of a degree pattern, as a boolean table indexed by degree. */
 function subsetSums(degrees: readonly number[], n: number): boolean[] {

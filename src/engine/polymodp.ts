@@ -109,10 +109,37 @@ export function remMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   return divmodMod(a, b, p).r;
 }
 
-/** Monic gcd over F_p. */
+/** x mod y in place on x's storage (x is a scratch copy); returns x trimmed. */
+function remInPlace(x: ModPoly, y: ModPoly, p: number): ModPoly {
+  const dy = y.length - 1;
+  const inv = invMod(y[dy], p);
+  let top = x.length - 1;
+  while (top >= dy) {
+    const lead = x[top];
+    if (lead !== 0) {
+      const c = (lead * inv) % p;
+      const base = top - dy;
+      for (let j = 0; j < dy; j++) {
+        const v = (x[base + j] - c * y[j]) % p;
+        x[base + j] = v < 0 ? v + p : v;
+      }
+    }
+    x[top] = 0;
+    top--;
+  }
+  x.length = Math.min(x.length, dy);
+  return trimMod(x);
+}
+
+/** Monic gcd over F_p (Euclid with in-place remainders: the factoring hot path calls it often). */
 export function gcdMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
-  let [x, y] = [a, b];
-  while (y.length > 0) [x, y] = [y, remMod(x, y, p)];
+  let x = a.slice();
+  let y = b.slice();
+  while (y.length > 0) {
+    const r = remInPlace(x, y, p);
+    x = y;
+    y = r;
+  }
   return monicMod(x, p);
 }
 
@@ -132,14 +159,49 @@ export function bezoutMod(a: ModPoly, b: ModPoly, p: number): { s: ModPoly; t: M
   return { s: scaleMod(s0, inv, p), t: scaleMod(t0, inv, p) };
 }
 
+/**
+ * a·b mod m for a monic m, with the reductions modulo p deferred: while 2·deg(m)·p² < 2^53 the
+ * unreduced sums stay exact in doubles, so each coefficient is reduced once instead of once per
+ * product. This is the inner loop of distinct- and equal-degree factorisation.
+ */
+function mulRemMonicDeferred(a: ModPoly, b: ModPoly, m: ModPoly, p: number): ModPoly {
+  if (a.length === 0 || b.length === 0) return [];
+  const len = a.length + b.length - 1;
+  const c = new Array<number>(len).fill(0);
+  for (let i = 0; i < a.length; i++) {
+    const ai = a[i];
+    if (ai === 0) continue;
+    for (let j = 0; j < b.length; j++) c[i + j] += ai * b[j];
+  }
+  const dm = m.length - 1;
+  for (let k = len - 1; k >= dm; k--) {
+    let q = c[k] % p;
+    if (q < 0) q += p;
+    if (q === 0) continue;
+    const base = k - dm;
+    for (let j = 0; j < dm; j++) c[base + j] -= q * m[j];
+  }
+  const out = c.slice(0, Math.min(dm, len));
+  for (let i = 0; i < out.length; i++) {
+    let v = out[i] % p;
+    if (v < 0) v += p;
+    out[i] = v;
+  }
+  return trimMod(out);
+}
+
 /** base^e mod m over F_p by square-and-multiply (e a bigint, as (p^d − 1)/2 can exceed 2^53). */
 export function powModPoly(base: ModPoly, e: bigint, m: ModPoly, p: number): ModPoly {
+  // Deferred reduction needs a monic modulus and sums of up to 2·deg m products below 2^53;
+  // subtracting q·m adds at most one more product per step (the same bound).
+  const deferred = m[m.length - 1] === 1 && 4 * m.length * p * p < 2 ** 53;
+  const mulRem = deferred ? (x: ModPoly, y: ModPoly) => mulRemMonicDeferred(x, y, m, p) : (x: ModPoly, y: ModPoly) => remMod(mulMod(x, y, p), m, p);
   let acc: ModPoly = [1];
   let b = remMod(base, m, p);
   while (e > 0n) {
-    if (e & 1n) acc = remMod(mulMod(acc, b, p), m, p);
+    if (e & 1n) acc = mulRem(acc, b);
     e >>= 1n;
-    if (e > 0n) b = remMod(mulMod(b, b, p), m, p);
+    if (e > 0n) b = mulRem(b, b);
   }
   return acc;
 }
