@@ -53,8 +53,9 @@ test('every bench characteristic polynomial factors as its PARI/GP oracle says',
 });
 
 test('x^4 + 1 is irreducible over Q though reducible modulo every prime', () => {
-  // von zur Gathen & Gerhard, Modern Computer Algebra (3rd ed. 2013), Example 14.? / §15.3: the
-  // standard example of a polynomial whose modular factorisations never show irreducibility.
+  // The standard example of a polynomial irreducible over Q whose factorisation modulo every prime
+  // is non-trivial (von zur Gathen & Gerhard, Modern Computer Algebra, Ch. 15 on Zassenhaus
+  // recombination; section number from memory not given).
   assert.ok(isIrreducibleOverQ(Poly.fromInts([1, 0, 0, 0, 1])));
   // x^4 + 4 = (x^2 - 2x + 2)(x^2 + 2x + 2) (Sophie Germain's identity; common practice, no source).
   const r = factorOverQ(Poly.fromInts([4, 0, 0, 0, 1]));
@@ -89,13 +90,15 @@ function swinnertonDyer(primes: number[]): Poly {
 }
 
 test('Swinnerton-Dyer polynomials are irreducible (hard cases for Zassenhaus recombination)', () => {
-  // Swinnerton-Dyer polynomials; von zur Gathen & Gerhard, Modern Computer Algebra, §15.3 and
-  // Exercise 15.? — irreducible over Q, but factor into linear and quadratic factors mod every p.
+  // Swinnerton-Dyer polynomials ∏(x ± √2 ± √3 ± …): irreducible over Q, but split into linear and
+  // quadratic factors modulo every prime, the worst case of Zassenhaus recombination (von zur
+  // Gathen & Gerhard, Modern Computer Algebra, Ch. 15; exact section from memory not given).
   const s2 = swinnertonDyer([2, 3]);
   assert.equal(s2.toString(), 'x^4 - 10*x^2 + 1'); // also the minimal polynomial of √2 + √3
   assert.ok(isIrreducibleOverQ(s2));
   const s3 = swinnertonDyer([2, 3, 5]);
-  assert.equal(s3.degree(), 8);
+  // Minimal polynomial of √2 + √3 + √5 (SymPy minimal_polynomial, run once by hand).
+  assert.equal(s3.toString(), 'x^8 - 40*x^6 + 352*x^4 - 960*x^2 + 576');
   assert.ok(isIrreducibleOverQ(s3));
   const s4 = swinnertonDyer([2, 3, 5, 7]);
   assert.equal(s4.degree(), 16);
