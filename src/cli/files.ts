@@ -1,10 +1,10 @@
 /**
  * Finding the notes to check: files named on the command line, and folders walked for `.md` and
- * `.tex` files, honouring each folder's `.gitignore` (and never entering `.git` or
- * `node_modules`).
+ * `.tex` files, honouring `.gitignore` files with git's meaning — those inside the folder and those
+ * above it up to the repository root — and never entering `.git` or `node_modules`.
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { extname, join, relative, resolve, sep } from 'node:path';
+import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { dirname, extname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import ignore, { type Ignore } from 'ignore';
 import type { DocumentLanguage } from '../checks/types';
 
@@ -38,14 +38,49 @@ function loadIgnore(dir: string): IgnoreLayer | undefined {
   }
 }
 
+/**
+ * Git's precedence: the deepest `.gitignore` with a matching rule decides (so a deeper `!rule`
+ * re-includes what a shallower file excluded); within one file the last matching rule wins.
+ */
 function isIgnored(layers: readonly IgnoreLayer[], path: string, isDir: boolean): boolean {
-  for (const layer of layers) {
+  for (let i = layers.length - 1; i >= 0; i--) {
+    const layer = layers[i];
     let rel = relative(layer.base, path).split(sep).join('/');
     if (!rel || rel.startsWith('..')) continue;
     if (isDir) rel += '/';
-    if (layer.rules.ignores(rel)) return true;
+    const verdict = layer.rules.test(rel);
+    if (verdict.ignored) return true;
+    if (verdict.unignored) return false;
   }
   return false;
+}
+
+/**
+ * The `.gitignore` files that apply to a folder named on the command line from above it: those
+ * from the repository root (the nearest folder above holding `.git`) — or, outside a repository,
+ * from the working folder when the named folder lies inside it — down to the folder's parent.
+ */
+function ancestorLayers(dir: string, cwd: string): IgnoreLayer[] {
+  if (existsSync(join(dir, '.git'))) return [];
+  const chain: string[] = [];
+  let inRepository = false;
+  for (let current = dirname(dir); ; current = dirname(current)) {
+    chain.push(current);
+    if (existsSync(join(current, '.git'))) {
+      inRepository = true;
+      break;
+    }
+    if (dirname(current) === current) break;
+  }
+  if (!inRepository) {
+    const rel = relative(cwd, dir);
+    if (!rel || rel.startsWith('..') || isAbsolute(rel)) return [];
+    chain.length = chain.indexOf(cwd) + 1;
+  }
+  return chain
+    .reverse()
+    .map(loadIgnore)
+    .filter((layer): layer is IgnoreLayer => layer !== undefined);
 }
 
 /**
@@ -99,7 +134,7 @@ export function collectNotes(paths: readonly string[], cwd: string): { notes: No
       errors.push(`${path}: no such file or folder`);
       continue;
     }
-    if (stats.isDirectory()) walk(abs, []);
+    if (stats.isDirectory()) walk(abs, ancestorLayers(abs, resolve(cwd)));
     else if (languageOf(abs)) add(abs);
     else errors.push(`${path}: not a Markdown (.md) or LaTeX (.tex) file`);
   }
