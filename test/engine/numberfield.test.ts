@@ -4,6 +4,7 @@ import { test } from 'node:test';
 import assert from 'node:assert/strict';
 import { NumberField } from '../../src/engine/numberfield';
 import { KPoly, kpolyGcd, kpolySquareFree } from '../../src/engine/kpoly';
+import { factorOverNumberField } from '../../src/engine/kfactor';
 import { Poly } from '../../src/engine/poly';
 import { Rational } from '../../src/engine/rational';
 import { diskContains, diskMul, disksIntersect, pointDisk } from '../../src/engine/disk';
@@ -80,4 +81,27 @@ test('polynomials over Q(√2): gcd and square-free decomposition', () => {
   const { quotient, remainder } = xSquaredMinus2.divmod(xMinusA);
   assert.ok(quotient.equals(xPlusA) && remainder.isZero());
   assert.ok(K.isZero(xSquaredMinus2.eval(a)));
+});
+
+test("Trager factorisation over Q(α): splitting fields and irreducible cases", () => {
+  // Examples worked by hand (common practice, no source): x² − 2 = (x − √2)(x + √2) over Q(√2);
+  // x⁴ + 1 = (x² − i)(x² + i) over Q(i); x³ − 2 = (x − ∛2)(x² + ∛2·x + ∛4) over Q(∛2);
+  // x² + 1 stays irreducible over the real field Q(√2); x⁴ − 10x² + 1 = (x² − 2√2x − 1)(x² + 2√2x − 1).
+  const r2 = new NumberField(P(-2, 0, 1));
+  const a = r2.generator;
+  const split = factorOverNumberField(r2, P(-2, 0, 1));
+  assert.equal(split.length, 2);
+  assert.ok(split.every((f) => f.factor.degree() === 1 && f.multiplicity === 1));
+  assert.ok(split.some((f) => f.factor.equals(KPoly.linear(r2, a))) && split.some((f) => f.factor.equals(KPoly.linear(r2, r2.neg(a)))));
+  assert.equal(factorOverNumberField(r2, P(1, 0, 1)).length, 1);
+  const sd = factorOverNumberField(r2, P(1, 0, -10, 0, 1));
+  assert.deepEqual(sd.map((f) => f.factor.degree()), [2, 2]);
+  assert.ok(sd.map((f) => f.factor).reduce((x, y) => x.mul(y)).equals(KPoly.fromPoly(r2, P(1, 0, -10, 0, 1))));
+  const G = NumberField.gaussian();
+  const x4 = factorOverNumberField(G, P(1, 0, 0, 0, 1));
+  assert.deepEqual(x4.map((f) => f.factor.toString('x', 'i')).sort(), ['x^2 + (-i)', 'x^2 + (i)']);
+  const c = new NumberField(P(-2, 0, 0, 1));
+  const cube = factorOverNumberField(c, P(-2, 0, 0, 1).mul(P(-2, 0, 0, 1)));
+  assert.deepEqual(cube.map((f) => [f.factor.degree(), f.multiplicity]), [[1, 2], [2, 2]]);
+  assert.ok(cube[0].factor.equals(KPoly.linear(c, c.generator)));
 });
