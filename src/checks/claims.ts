@@ -2,15 +2,18 @@
  * One statement → definitions and verdicts. Reads each link of a relation chain: a definition
  * binds a name; a claim involving a matrix is decided exactly; prose among scalars is left alone.
  */
-import { Budget } from '../engine/index';
+import { Budget, Rational } from '../engine/index';
+import { isReal, toAlgebraic } from './number';
 import type { Expr, Link, MatrixEnvironment, Statement } from '../notation/index';
 import { compareValues, distinctScalars } from './compare';
 import type { Environment } from './environment';
-import { displayName, evaluate, type EvalContext } from './evaluate';
+import { displayName, evaluate, looksLikeMatrixName, type EvalContext } from './evaluate';
 import { decimalPlaces, involvesExponential, involvesMatrix, isLiteralValue, styleOf, walk } from './inspect';
-import { valueLatex, valueText, type PrintStyle } from './print';
+import { matrixLatex, valueLatex, valueText, type PrintStyle } from './print';
+import { jordanMatrixOf, jordanStructure, sameStructure, type EigenStructure } from './spectral';
+import { numLatex, numText } from './number';
 import type { ClaimResult, CheckerConfig, DefinitionRef, TextEdit } from './types';
-import { Undecidable, type Value } from './values';
+import { shapeText, Undecidable, type Value } from './values';
 
 /** What processing a statement needs. */
 export interface StatementContext {
@@ -174,12 +177,10 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
     claimed = evaluate(claimedExpr, ec);
   } catch (error) {
     if (!(error instanceof Undecidable)) throw error;
-    return result(link, ctx, 'unchecked', error.code, error.message, related(ec), { caution });
+    return uncheckedFor(error, link, ctx, related(ec), caution);
   }
   const relation = link.relation.kind;
-  if (relation === 'similar') {
-    return result(link, ctx, 'unchecked', 'unchecked.unsupported', 'similarity (Jordan structure) is not supported yet', related(ec), { caution });
-  }
+  if (relation === 'similar') return decideSimilar(link, ctx, computed, claimed, claimedExpr, related(ec), caution, budget);
   if (relation === 'less' || relation === 'greater' || relation === 'lessOrEqual' || relation === 'greaterOrEqual') {
     return decideOrder(link, ctx, computed, claimed, swap, related(ec), caution);
   }
@@ -190,7 +191,7 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
     comparison = compareValues(computed, claimed, claimedPlaces);
   } catch (error) {
     if (!(error instanceof Undecidable)) throw error;
-    return result(link, ctx, 'unchecked', error.code, error.message, related(ec), { caution });
+    return uncheckedFor(error, link, ctx, related(ec), caution);
   }
   const computedPlain = ctx.plain(computedExpr);
   const claimedPlain = ctx.plain(claimedExpr);
@@ -230,12 +231,32 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
   });
 }
 
+/**
+ * The unchecked verdict for an undecidable claim. When the claim uses capital-letter names that
+ * have no definition above, that is almost always the real reason, so it is named instead.
+ */
+function uncheckedFor(error: Undecidable, link: Link, ctx: StatementContext, refs: DefinitionRef[], caution: boolean): ClaimResult {
+  const found: { name: string; start: number }[] = [];
+  for (const side of [link.left, link.right]) {
+    walk(side, (n) => {
+      if (n.kind === 'symbol' && looksLikeMatrixName(n.base) && !ctx.env.lookup(n.key)) found.push({ name: displayName(n.key), start: n.start });
+    });
+  }
+  const missing = [...new Set(found.sort((a, b) => a.start - b.start).map((f) => f.name))];
+  if (missing.length && error.code !== 'unchecked.budget') {
+    const names = missing.length === 1 ? missing[0] : `${missing.slice(0, -1).join(', ')} and ${missing[missing.length - 1]}`;
+    return result(link, ctx, 'unchecked', 'unchecked.undefined-name', `${names} ${missing.length === 1 ? 'is' : 'are'} not defined above this claim`, refs, { caution });
+  }
+  return result(link, ctx, 'unchecked', error.code, error.message, refs, { caution });
+}
+
 function decideOrder(link: Link, ctx: StatementContext, computed: Value, claimed: Value, swapped: boolean, refs: DefinitionRef[], caution: boolean): ClaimResult {
   if (computed.kind !== 'scalar' || claimed.kind !== 'scalar' || computed.value.k !== 'num' || claimed.value.k !== 'num') {
     return result(link, ctx, 'unchecked', 'unchecked.unsupported', 'only real numbers can be ordered', refs, { caution });
   }
   const [l, r] = swapped ? [claimed.value.v, computed.value.v] : [computed.value.v, claimed.value.v];
-  const c = l.compare(r);
+  if (!isReal(l) || !isReal(r)) return result(link, ctx, 'unchecked', 'unchecked.unsupported', 'complex numbers cannot be ordered', refs, { caution });
+  const c = l instanceof Rational && r instanceof Rational ? l.compare(r) : toAlgebraic(l).compare(toAlgebraic(r));
   const kind = link.relation.kind;
   const holds = kind === 'less' ? c < 0 : kind === 'greater' ? c > 0 : kind === 'lessOrEqual' ? c <= 0 : c >= 0;
   const text = ctx.text.slice(link.start, link.end).trim();
@@ -268,3 +289,52 @@ function entryPlaces(claimed: Expr): (index: number) => number | undefined {
 
 /** A print style for a value that follows the claimed expression. */
 export type { PrintStyle };
+
+function structureText(structure: readonly EigenStructure[]): string {
+  return structure.map((e) => `${numText(e.eigenvalue)}: block${e.sizes.length === 1 ? '' : 's'} ${e.sizes.join(', ')}`).join('; ');
+}
+
+function jordanBlocksLatex(structure: readonly EigenStructure[]): string {
+  const blocks: string[] = [];
+  for (const e of structure) for (const size of e.sizes) blocks.push(`J_{${size}}(${numLatex(e.eigenvalue)})`);
+  return blocks.join(' \\oplus ');
+}
+
+/** `A \sim M`: the same eigenvalues with the same Jordan block sizes. */
+function decideSimilar(link: Link, ctx: StatementContext, left: Value, right: Value, claimedExpr: Expr, refs: DefinitionRef[], caution: boolean, budget: Budget): ClaimResult {
+  if (left.kind !== 'matrix' || right.kind !== 'matrix') {
+    return result(link, ctx, 'unchecked', 'unchecked.not-a-matrix', 'similarity is a relation between two square matrices', refs, { caution });
+  }
+  if (left.value.rows !== right.value.rows || left.value.cols !== right.value.cols) {
+    return result(link, ctx, 'fails', 'similar.size', `matrices of different sizes (${shapeText(left.value)} and ${shapeText(right.value)}) are not similar`, refs, { caution });
+  }
+  let a: EigenStructure[];
+  let b: EigenStructure[];
+  try {
+    a = jordanStructure(left.value, budget, ctx.config.maxMatrixSize);
+    b = jordanStructure(right.value, budget, ctx.config.maxMatrixSize);
+  } catch (error) {
+    if (error instanceof Undecidable) return result(link, ctx, 'unchecked', error.code, error.message, refs, { caution });
+    throw error;
+  }
+  if (sameStructure(a, b)) return result(link, ctx, 'holds', 'claim.holds', `${ctx.plain(link.left)} ∼ ${ctx.plain(link.right)} holds (${structureText(a)})`, refs, { caution });
+  const usesBlocks = (() => {
+    let found = false;
+    walk(claimedExpr, (n) => {
+      if (n.kind === 'apply' && n.func === 'jordanBlock') found = true;
+    });
+    return found;
+  })();
+  const style = styleOf(claimedExpr);
+  const expected = usesBlocks ? jordanBlocksLatex(a) : matrixLatex(jordanMatrixOf(a), style);
+  const fixable = isLiteralValue(claimedExpr, ctx.env);
+  return result(
+    link,
+    ctx,
+    'fails',
+    'similar.block-sizes',
+    `${ctx.plain(link.left)} is not similar to ${ctx.plain(link.right)}: the Jordan structure of ${ctx.plain(link.left)} is ${structureText(a)}, not ${structureText(b)}`,
+    refs,
+    { expected, caution, ...(fixable ? { fix: { offset: claimedExpr.start, length: claimedExpr.end - claimedExpr.start, text: expected } } : {}) },
+  );
+}

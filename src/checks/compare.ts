@@ -4,7 +4,8 @@
  * or sets (SPEC §3).
  */
 import { Matrix } from '../engine/index';
-import { asRational, SCALAR, type Scalar } from './scalar';
+import { roundsTo } from './numeric';
+import { SCALAR, type Scalar } from './scalar';
 import { shapeText, Undecidable, type Value } from './values';
 
 /** The outcome of comparing a computed value with a claimed one. */
@@ -19,16 +20,6 @@ export interface Comparison {
 
 function scalarsEqual(a: Scalar, b: Scalar): boolean {
   return SCALAR.equals(a, b);
-}
-
-/** |exact − written| ≤ half a unit in the written last place. */
-export function roundsTo(exact: Scalar, written: Scalar, places: number): boolean {
-  const x = asRational(exact);
-  const d = asRational(written);
-  if (!x || !d) throw new Undecidable('unchecked.unsupported', 'decimal agreement is decided for rational values only so far');
-  const diff = x.sub(d).abs();
-  // diff ≤ 1 / (2·10^places)  ⇔  2·10^places·diff ≤ 1
-  return diff.num * 2n * 10n ** BigInt(places) <= diff.den;
 }
 
 function asMatrixLike(v: Value, shapeOf: Matrix<Scalar>): Matrix<Scalar> | undefined {

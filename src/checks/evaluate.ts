@@ -7,7 +7,11 @@ import { Budget, BudgetError, EngineError, Matrix, Rational, SingularError } fro
 import type { ApplyExpr, Expr, MatrixExpr } from '../notation/index';
 import type { Definition, Environment } from './environment';
 import * as ops from './operations';
-import { int, num, SCALAR, type Scalar } from './scalar';
+import { walk } from './inspect';
+import * as spectral from './spectral';
+import { asRational, expScalar, int, num, SCALAR, symbol, trigScalar, type Scalar } from './scalar';
+import { AlgebraicNumber } from '../engine/index';
+import { normalise } from './number';
 import { scalarValue, Undecidable, type Value } from './values';
 
 /** What evaluation needs besides the expression. */
@@ -17,6 +21,8 @@ export interface EvalContext {
   readonly maxMatrixSize: number;
   /** Definitions used so far (filled in by evaluation). */
   readonly used: Definition[];
+  /** Which value `a \pm b` stands for while an eigenvalue list is expanded (+1 or −1). */
+  pmSign?: 1 | -1;
 }
 
 /** Largest exponent accepted for a matrix or scalar power before the size budget refuses it. */
@@ -45,6 +51,10 @@ export function evaluate(expr: Expr, ctx: EvalContext): Value {
 
 /** Evaluates an expression that must be a matrix. */
 export function evaluateMatrix(expr: Expr, ctx: EvalContext, what: string): Matrix<Scalar> {
+  const u = expr.kind === 'group' ? expr.inner : expr;
+  if (u.kind === 'symbol' && !ctx.env.lookup(u.key)) {
+    throw new Undecidable('unchecked.undefined-name', `${displayName(u.key)} is not defined above this claim`);
+  }
   const v = evaluate(expr, ctx);
   if (v.kind === 'matrix') return v.value;
   if (v.kind === 'identity') throw new Undecidable('unchecked.size-mismatch', `the size of I in ${what} is not known`);
@@ -59,7 +69,7 @@ export function evaluateScalar(expr: Expr, ctx: EvalContext): Scalar {
 }
 
 function integerOf(s: Scalar, what: string): number {
-  const r = s.k === 'num' ? s.v : undefined;
+  const r = asRational(s);
   if (!r || !r.isInteger()) throw new Undecidable('unchecked.unsupported', `${what} must be an integer`);
   const n = r.num;
   if (n > BigInt(Number.MAX_SAFE_INTEGER) || n < -BigInt(Number.MAX_SAFE_INTEGER)) {
@@ -86,13 +96,12 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
         if (!ctx.used.includes(def)) ctx.used.push(def);
         return { kind: 'matrix', value: def.value };
       }
-      if (looksLikeMatrixName(expr.base)) {
-        throw new Undecidable('unchecked.undefined-name', `${displayName(expr.key)} is not defined above this claim`);
-      }
-      throw new Undecidable('unchecked.free-parameters', `the claim has the free symbol ${displayName(expr.key)}`);
+      return scalarValue(symbol(expr.key));
     }
     case 'constant':
-      throw new Undecidable('unchecked.unsupported', `the constant ${expr.text} is not supported here yet`);
+      if (expr.name === 'i') return scalarValue(num(AlgebraicNumber.i()));
+      if (expr.name === 'e') return scalarValue(expScalar(int(1)));
+      throw new Undecidable('unchecked.unsupported', `the constant ${expr.text} is not supported here`);
     case 'identity': {
       if (!expr.size) return { kind: 'identity', factor: SCALAR.one };
       const n = integerOf(evaluateScalar(expr.size, ctx), 'the size of I');
@@ -103,8 +112,13 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
       const v = evaluate(expr.operand, ctx);
       return expr.sign === '-' ? ops.negate(v) : v;
     }
-    case 'plusMinus':
-      throw new Undecidable('unchecked.unsupported', '± stands for two values; it is read only inside an eigenvalue list');
+    case 'plusMinus': {
+      if (ctx.pmSign === undefined) throw new Undecidable('unchecked.unsupported', '± stands for two values; it is read only inside an eigenvalue list');
+      const sign = expr.symbol === '\\mp' ? -ctx.pmSign : ctx.pmSign;
+      const right = evaluate(expr.right, ctx);
+      const signed = sign > 0 ? right : ops.negate(right);
+      return expr.left ? ops.add(evaluate(expr.left, ctx), signed) : signed;
+    }
     case 'add':
       return ops.add(evaluate(expr.left, ctx), evaluate(expr.right, ctx));
     case 'subtract':
@@ -134,8 +148,12 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
       if (v.kind === 'scalar') return scalarValue(ops.conjugate(v.value));
       return v;
     }
-    case 'sqrt':
-      return scalarValue(ops.root(evaluateScalar(expr.radicand, ctx), expr.index ? integerOf(evaluateScalar(expr.index, ctx), 'the root index') : 2));
+    case 'sqrt': {
+      const index = expr.index ? integerOf(evaluateScalar(expr.index, ctx), 'the root index') : 2;
+      const radicand = asRational(evaluateScalar(expr.radicand, ctx));
+      if (!radicand || index < 2 || index > 12) throw new Undecidable('unchecked.unsupported', 'roots are supported of rational numbers, with index 2 to 12');
+      return scalarValue(num(normalise(index === 2 ? AlgebraicNumber.sqrt(radicand) : AlgebraicNumber.nthRoot(radicand, index))));
+    }
     case 'factorial': {
       const n = integerOf(evaluateScalar(expr.operand, ctx), 'n in n!');
       if (n < 0) throw new Undecidable('unchecked.unsupported', 'n! needs n ≥ 0');
@@ -150,10 +168,16 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
     case 'list': {
       const elements: Scalar[] = [];
       for (const e of expr.elements) {
-        if (e.kind === 'plusMinus') {
-          const right = evaluateScalar(e.right, ctx);
-          const left = e.left ? evaluateScalar(e.left, ctx) : SCALAR.zero;
-          elements.push(SCALAR.add(left, right), SCALAR.sub(left, right));
+        if (containsPlusMinus(e)) {
+          // `a \pm b` (anywhere inside the entry, as in \frac{5 \pm \sqrt{5}}{2}) stands for two values.
+          for (const sign of [1, -1] as const) {
+            ctx.pmSign = sign;
+            try {
+              elements.push(evaluateScalar(e, ctx));
+            } finally {
+              ctx.pmSign = undefined;
+            }
+          }
         } else {
           elements.push(evaluateScalar(e, ctx));
         }
@@ -242,17 +266,18 @@ function evaluateApply(expr: ApplyExpr, ctx: EvalContext): Value {
     case 'minpoly': {
       if (!expr.subscript) throw new Undecidable('unchecked.unreadable', 'the characteristic polynomial needs its matrix, as in \\chi_A(\\lambda)');
       const m = evaluateMatrix(expr.subscript, ctx, expr.func === 'charpoly' ? 'the characteristic polynomial' : 'the minimal polynomial');
-      return ops.polynomialOfMatrix(expr.func, m, expr.args, ctx);
+      const argument = expr.args.length === 1 ? evaluate(expr.args[0], ctx) : undefined;
+      return spectral.polynomialAt(expr.func, m, argument, ctx.budget, ctx.maxMatrixSize);
     }
     case 'spectrum':
-      return ops.spectrumValue(evaluateMatrix(single('σ'), ctx, 'the spectrum'), ctx.budget);
+      return spectral.spectrumValue(evaluateMatrix(single('σ'), ctx, 'the spectrum'), ctx.budget, ctx.maxMatrixSize);
     case 'exp':
-      return ops.exponential(single('exp'), ctx);
+      return wrapPower(spectral.exponentialOf(evaluate(single('exp'), ctx), ctx.budget, ctx.maxMatrixSize));
     case 'cos':
     case 'sin':
     case 'cosh':
     case 'sinh':
-      return wrapPower(ops.trigonometric(expr.func, single(expr.func), ctx));
+      return wrapPower(scalarValue(trigScalar(expr.func, evaluateScalar(single(expr.func), ctx))));
     case 'kernel':
     case 'dim':
     case 'ln':
@@ -262,7 +287,17 @@ function evaluateApply(expr: ApplyExpr, ctx: EvalContext): Value {
   }
 }
 
-function looksLikeMatrixName(base: string): boolean {
+function containsPlusMinus(e: Expr): boolean {
+  let found = false;
+  walk(e, (n) => {
+    if (n.kind === 'plusMinus') found = true;
+    return !found;
+  });
+  return found;
+}
+
+/** True for names that usually denote matrices (capital letters), for clearer messages. */
+export function looksLikeMatrixName(base: string): boolean {
   return /^[A-Z]$/.test(base) || /^\\(Gamma|Delta|Theta|Lambda|Xi|Pi|Sigma|Upsilon|Phi|Psi|Omega)$/.test(base) || /\\(tilde|hat|bar)\{[A-Z]\}/.test(base);
 }
 

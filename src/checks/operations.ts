@@ -3,10 +3,8 @@
  * use. Rational matrices take the engine's fast exact routes; others run the generic kernels over
  * the scalar field.
  */
-import { Budget, determinant as engineDeterminant, Matrix, QQ, rank as engineRank, inverse as engineInverse, Rational, directSum as engineDirectSum } from '../engine/index';
-import type { Expr } from '../notation/index';
-import type { EvalContext } from './evaluate';
-import { asRational, num, powScalar, SCALAR, type Scalar } from './scalar';
+import { AlgebraicNumber, Budget, determinant as engineDeterminant, Matrix, QParams, QQ, rank as engineRank, inverse as engineInverse, parameterInverse, Rational, RationalFunction, directSum as engineDirectSum } from '../engine/index';
+import { asRational, conjugateScalar, fromSymbolic, num, powScalar, SCALAR, type Scalar } from './scalar';
 import { scalarValue, shapeText, Undecidable, type Value } from './values';
 
 /** The rational matrix with the same entries, when every entry is rational. */
@@ -110,6 +108,8 @@ export function inverseOf(m: Matrix<Scalar>, budget: Budget): Matrix<Scalar> {
   requireSquare(m, 'the inverse');
   const r = toRationalMatrix(m);
   if (r) return fromRationalMatrix(engineInverse(r, budget));
+  const p = toParameterMatrix(m);
+  if (p) return parameterInverse(p, budget).map(SCALAR, (x) => fromSymbolic(x));
   return engineInverse(m, budget);
 }
 
@@ -144,11 +144,24 @@ export function directSum(...blocks: Matrix<Scalar>[]): Value {
   return { kind: 'matrix', value: engineDirectSum(...blocks) };
 }
 
-/** det of a square matrix. */
+/** The matrix over Q(params), when every entry is rational or a rational function. */
+export function toParameterMatrix(m: Matrix<Scalar>): Matrix<RationalFunction> | undefined {
+  const entries: RationalFunction[] = [];
+  for (const e of m.entries) {
+    if (e.k === 'sym') entries.push(e.v);
+    else if (e.k === 'num' && e.v instanceof Rational) entries.push(RationalFunction.constant(e.v));
+    else return undefined;
+  }
+  return Matrix.fromEntries(QParams, m.rows, m.cols, entries);
+}
+
+/** det of a square matrix: multi-modular for rationals, division-free with parameters. */
 export function determinant(m: Matrix<Scalar>, budget: Budget): Scalar {
   requireSquare(m, 'det');
   const r = toRationalMatrix(m);
   if (r) return num(engineDeterminant(r, budget));
+  const p = toParameterMatrix(m);
+  if (p) return fromSymbolic(engineDeterminant(p, budget));
   return engineDeterminant(m, budget);
 }
 
@@ -164,63 +177,14 @@ export function rankOf(m: Matrix<Scalar>, budget: Budget): number {
   return r ? engineRank(r, budget) : engineRank(m, budget);
 }
 
-/** Complex conjugation of a scalar (identity on real values). */
-export function conjugate(s: Scalar): Scalar {
-  return s;
-}
+/** Complex conjugation of a scalar (real parameters and real t assumed). */
+export const conjugate = conjugateScalar;
 
-/** |x| for a real scalar. */
+/** |x| for a real number. */
 export function absolute(s: Scalar): Scalar {
   const r = asRational(s);
   if (r) return num(r.abs());
-  throw new Undecidable('unchecked.unsupported', '|x| is supported for rational x');
+  if (s.k === 'num' && s.v instanceof AlgebraicNumber && s.v.isReal()) return s.v.sign() < 0 ? SCALAR.neg(s) : s;
+  throw new Undecidable('unchecked.unsupported', '|x| is supported for real numbers');
 }
 
-/** The n-th root of a scalar, exact when it is rational. */
-export function root(s: Scalar, n: number): Scalar {
-  const r = asRational(s);
-  if (r && n >= 1) {
-    const exact = rationalRoot(r, n);
-    if (exact) return num(exact);
-  }
-  throw new Undecidable('unchecked.unsupported', 'irrational roots are not supported here yet');
-}
-
-function integerRoot(x: bigint, n: number): bigint | undefined {
-  if (x < 0n) return n % 2 === 1 ? (() => { const r = integerRoot(-x, n); return r === undefined ? undefined : -r; })() : undefined;
-  if (x < 2n) return x;
-  let lo = 0n;
-  let hi = 1n << BigInt(Math.ceil(x.toString(2).length / n) + 1);
-  while (lo < hi) {
-    const mid = (lo + hi + 1n) >> 1n;
-    if (mid ** BigInt(n) <= x) lo = mid;
-    else hi = mid - 1n;
-  }
-  return lo ** BigInt(n) === x ? lo : undefined;
-}
-
-function rationalRoot(r: Rational, n: number): Rational | undefined {
-  const a = integerRoot(r.num, n);
-  const b = integerRoot(r.den, n);
-  return a !== undefined && b !== undefined ? Rational.of(a, b) : undefined;
-}
-
-/** χ_A(x) or μ_A(x) evaluated at the given argument. */
-export function polynomialOfMatrix(_which: 'charpoly' | 'minpoly', _m: Matrix<Scalar>, _args: readonly Expr[], _ctx: EvalContext): Value {
-  throw new Undecidable('unchecked.unsupported', 'characteristic and minimal polynomials are not supported yet');
-}
-
-/** σ(A) as a list of eigenvalues with algebraic multiplicity. */
-export function spectrumValue(_m: Matrix<Scalar>, _budget: Budget): Value {
-  throw new Undecidable('unchecked.unsupported', 'eigenvalues are not supported yet');
-}
-
-/** e^{M}, e^{At}. */
-export function exponential(_arg: Expr, _ctx: EvalContext): Value {
-  throw new Undecidable('unchecked.unsupported', 'matrix exponentials are not supported yet');
-}
-
-/** cos, sin, cosh, sinh of a scalar expression in t. */
-export function trigonometric(_f: 'cos' | 'sin' | 'cosh' | 'sinh', _arg: Expr, _ctx: EvalContext): Value {
-  throw new Undecidable('unchecked.unsupported', 'trigonometric functions are not supported yet');
-}

@@ -12,6 +12,57 @@ const GREEK: Record<string, string> = {
   Phi: 'Φ', Psi: 'Ψ', Omega: 'Ω',
 };
 
+/** Reads a brace group starting at `open` (which must be `{`); returns its content and the index after it. */
+function braceGroup(s: string, open: number): { content: string; next: number } | undefined {
+  if (s[open] !== '{') return undefined;
+  let depth = 0;
+  for (let i = open; i < s.length; i++) {
+    if (s[i] === '\\') {
+      i++;
+      continue;
+    }
+    if (s[i] === '{') depth++;
+    else if (s[i] === '}' && --depth === 0) return { content: s.slice(open + 1, i), next: i + 1 };
+  }
+  return undefined;
+}
+
+function simple(text: string): boolean {
+  return /^-?[\p{L}\p{N}.√]+$/u.test(text);
+}
+
+/** Rewrites `\cmd{a}{b}` (or `\cmd{a}`) with brace-aware matching, innermost content first. */
+function rewriteCommand(s: string, pattern: RegExp, arity: 1 | 2, render: (args: string[]) => string): string {
+  let out = '';
+  let i = 0;
+  for (;;) {
+    pattern.lastIndex = i;
+    const m = pattern.exec(s);
+    if (!m) return out + s.slice(i);
+    let at = m.index + m[0].length;
+    while (s[at] === ' ') at++;
+    const args: string[] = [];
+    let ok = true;
+    for (let k = 0; k < arity; k++) {
+      while (s[at] === ' ') at++;
+      const g = braceGroup(s, at);
+      if (!g) {
+        ok = false;
+        break;
+      }
+      args.push(rewriteCommand(g.content, new RegExp(pattern.source, 'g'), arity, render));
+      at = g.next;
+    }
+    if (!ok) {
+      out += s.slice(i, m.index + m[0].length);
+      i = m.index + m[0].length;
+      continue;
+    }
+    out += s.slice(i, m.index) + render(args);
+    i = at;
+  }
+}
+
 /** A LaTeX fragment made readable as plain text. */
 export function softenLatex(latex: string): string {
   let s = latex.replace(/\s+/g, ' ').trim();
@@ -19,12 +70,12 @@ export function softenLatex(latex: string): string {
   s = s.replace(/\\(?:operatorname|mathrm|text|mathsf|mathbf|mathit)\s*\{([^{}]*)\}/g, '$1');
   s = s.replace(/\\(?:left|right|big|Big|bigl|bigr|Bigl|Bigr)\b/g, '');
   s = s.replace(/\\[,;:!]/g, ' ');
-  s = s.replace(/\\(?:d|t)?frac\s*\{([^{}]*)\}\s*\{([^{}]*)\}/g, '($1)/($2)');
-  s = s.replace(/\\sqrt\s*\{([^{}]*)\}/g, '√($1)');
-  s = s.replace(/\\cdot/g, '·').replace(/\\times/g, '×').replace(/\\pm/g, '±').replace(/\\oplus/g, '⊕').replace(/\\top\b/g, 'T');
+  s = rewriteCommand(s, /\\sqrt/g, 1, ([a]) => (simple(a) ? `√${a}` : `√(${a})`));
+  s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}`);
+  s = s.replace(/\\cdot/g, '·').replace(/\\times/g, '×').replace(/\\pm/g, '±').replace(/\\mp/g, '∓').replace(/\\oplus/g, '⊕').replace(/\\top\b/g, 'T');
   s = s.replace(/\\\{/g, '{').replace(/\\\}/g, '}');
   s = s.replace(/\\([a-zA-Z]+)/g, (m, name: string) => GREEK[name] ?? name);
-  s = s.replace(/\^\{([^{}]*)\}/g, '^$1').replace(/_\{([^{}]*)\}/g, '_$1');
+  s = s.replace(/\^\{([^{}]*)\}/g, (_m, e: string) => (/^[\p{L}\p{N}]+$/u.test(e) ? `^${e}` : `^(${e})`)).replace(/_\{([^{}]*)\}/g, '_$1');
   return s.replace(/\s+/g, ' ').replace(/\(\s+/g, '(').replace(/\s+\)/g, ')').trim();
 }
 

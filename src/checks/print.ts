@@ -2,7 +2,8 @@
  * Values → LaTeX and plain text, in the user's style: the matrix environment they used, decimals
  * when they wrote decimals (rounded to their number of places), `\frac` or `a/b` as they wrote.
  */
-import type { Matrix, Rational } from '../engine/index';
+import type { Matrix } from '../engine/index';
+import { formatScalar } from './print-scalar';
 import type { MatrixEnvironment } from '../notation/index';
 import { asRational, SCALAR, type Scalar } from './scalar';
 
@@ -22,59 +23,14 @@ export interface PrintStyle {
 /** The style used when nothing in the claim suggests another. */
 export const defaultStyle: PrintStyle = Object.freeze({ environment: 'pmatrix', fraction: 'frac' });
 
-/** A rational rounded to `places` decimals, half away from zero, as text ("-0.33"). */
-export function roundedDecimal(r: Rational, places: number): string {
-  const scale = 10n ** BigInt(places);
-  const n = r.num < 0n ? -r.num : r.num;
-  // round(n/d · scale) half away from zero
-  const scaled = (2n * n * scale + r.den) / (2n * r.den);
-  const sign = r.num < 0n && scaled !== 0n ? '-' : '';
-  const digits = scaled.toString().padStart(places + 1, '0');
-  return places === 0 ? `${sign}${digits}` : `${sign}${digits.slice(0, -places)}.${digits.slice(-places)}`;
-}
-
-/** The exact decimal expansion of a rational when it terminates within `maxPlaces` places. */
-export function exactDecimal(r: Rational, maxPlaces = 30): string | undefined {
-  let d = r.den;
-  let twos = 0;
-  let fives = 0;
-  while (d % 2n === 0n) {
-    d /= 2n;
-    twos++;
-  }
-  while (d % 5n === 0n) {
-    d /= 5n;
-    fives++;
-  }
-  if (d !== 1n) return undefined;
-  const places = Math.max(twos, fives);
-  return places > maxPlaces ? undefined : roundedDecimal(r, places);
-}
-
-function rationalLatex(r: Rational, style: PrintStyle): string {
-  if (style.decimalPlaces !== undefined) return exactDecimal(r, style.decimalPlaces) ?? roundedDecimal(r, style.decimalPlaces);
-  if (r.isInteger()) return r.num.toString();
-  const sign = r.num < 0n ? '-' : '';
-  const a = r.num < 0n ? -r.num : r.num;
-  if (style.fraction === 'slash') return `${sign}${a}/${r.den}`;
-  return `${sign}\\${style.fraction}{${a}}{${r.den}}`;
-}
-
 /** A scalar as LaTeX. */
 export function scalarLatex(s: Scalar, style: PrintStyle = defaultStyle): string {
-  const r = asRational(s);
-  if (r) return rationalLatex(r, style);
-  return String(s);
+  return formatScalar(s, 'latex', style);
 }
 
-/** A scalar as plain text ("16", "-3/4", "0.33"). */
+/** A scalar as plain text ("16", "-3/4", "0.33", "e^(-2t)·(1 + 2t)"). */
 export function scalarText(s: Scalar, style: PrintStyle = defaultStyle): string {
-  const r = asRational(s);
-  if (r) {
-    if (style.decimalPlaces !== undefined) return exactDecimal(r, style.decimalPlaces) ?? roundedDecimal(r, style.decimalPlaces);
-    return r.toString();
-  }
-  return String(s);
+  return formatScalar(s, 'text', style);
 }
 
 /** A matrix as LaTeX in the given environment. */
