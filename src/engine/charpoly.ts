@@ -4,9 +4,11 @@
  *
  * - Z and Q (denominators cleared): multi-modular. Hessenberg reduction + recurrence modulo primes
  *   below 2^26 on Float64Arrays (modular.ts), Chinese remaindering with a proven bound. Measured
- *   on this project's 2-core machines (bench/engine.ts, dense 20×20 with entries in [−9, 9]):
- *   multi-modular ≈ 0.1 ms; Berkowitz on bigint ≈ 25 ms; Berkowitz on Rational ≈ 60 ms. The
- *   multi-modular route is the only one within reach of the "10× of PARI/GP" target.
+ *   with bench/charpoly-methods.ts (fastest of 7 samples, on a shared 2-core machine under load,
+ *   seeded random entries in [−9, 9]): n = 8: 30 µs vs Berkowitz on bigint 80–110 µs; n = 12:
+ *   63 µs vs 92–99 µs; n = 16: 97 µs vs 2.4 ms; n = 20: 0.2 ms vs 4–9 ms; Berkowitz on Rational
+ *   at n = 20: 3.7 ms. The multi-modular route wins from n = 8 on and is the only one within
+ *   reach of the "10× of PARI/GP" target; below n = 8 all methods take a few microseconds.
  * - Any other commutative ring (Q(α), rational functions of parameters): Berkowitz, which is
  *   division-free (so it never needs an inverse and never creates fractions in a polynomial ring)
  *   and O(n^4) ring operations — fine for the sizes such matrices come in.
@@ -104,8 +106,7 @@ export function charpolyIntegerModular(entries: readonly bigint[], n: number, bu
 
 /**
  * The determinant of an integer matrix by the multi-modular route (Hadamard bound
- * |det A| ≤ Π ⌈‖row_i‖₂⌉). Measured against Bareiss on bigint (bench/engine.ts): about 5× faster at
- * n = 12 and 10× at n = 20 for single-digit entries, so `determinant` uses it for Z and Q.
+ * |det A| ≤ Π ⌈‖row_i‖₂⌉).
  */
 export function determinantIntegerModular(entries: readonly bigint[], n: number, budget: Budget = Budget.unlimited()): bigint {
   if (n === 0) return 1n;
@@ -150,13 +151,21 @@ export function characteristicPolynomial(m: Matrix<bigint> | Matrix<Rational>, b
   return domainLevel(m.domain) === 0 ? Poly.fromInts(coeffs as bigint[]) : Poly.fromRationals(coeffs as Rational[]);
 }
 
+/** Below this size Z and Q determinants use Bareiss, from it on the multi-modular route. */
+export const MODULAR_DETERMINANT_FROM_SIZE = 11;
+
 /**
- * The determinant in the matrix's own domain: multi-modular for Z and Q (see
- * `determinantIntegerModular` for the measurement), Bareiss/Gauss otherwise (matrix-elimination.ts).
+ * The determinant in the matrix's own domain. Z and Q: Bareiss on bigint below
+ * {@link MODULAR_DETERMINANT_FROM_SIZE}, multi-modular from there on — measured with
+ * bench/charpoly-methods.ts (random entries in [−9, 9], fastest of 7 samples): n = 8: modular
+ * 38–58 µs vs Bareiss 23 µs; n = 12: 51–62 vs 66–109 µs; n = 16: 100 vs 137–231 µs; n = 20:
+ * 200 vs 270 µs; n = 30: 0.9–2.2 ms vs 2.5–3.1 ms. Parameter matrices: Berkowitz
+ * (division-free). Other fields: Gaussian elimination (matrix-elimination.ts).
  */
 export function determinant<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): T {
   const n = m.requireSquare();
   const level = domainLevel(m.domain);
+  if (level <= 1 && n < MODULAR_DETERMINANT_FROM_SIZE) return determinantBareiss(m, budget);
   if (level === 0) return determinantIntegerModular(m.entries as readonly bigint[], n, budget) as T;
   if (level === 1) {
     const { scale, entries } = scaledToIntegers(m as Matrix<Rational>);

@@ -40,8 +40,12 @@ export function inverseModPrime(a: number, p: number): number {
   let s1 = 1;
   while (r1 !== 0) {
     const qt = Math.floor(r0 / r1);
-    [r0, r1] = [r1, r0 - qt * r1];
-    [s0, s1] = [s1, s0 - qt * s1];
+    const r2 = r0 - qt * r1;
+    r0 = r1;
+    r1 = r2;
+    const s2 = s0 - qt * s1;
+    s0 = s1;
+    s1 = s2;
   }
   return s0 < 0 ? s0 + p : s0;
 }
@@ -194,21 +198,23 @@ export function determinantModP(a: Float64Array, n: number, p: number): number {
       }
       det = det === 0 ? 0 : p - det;
     }
-    const pivot = a[c * n + c];
+    const rowC = c * n;
+    const pivot = a[rowC + c];
     det = (det * pivot) % p;
     const pinvPivot = inverseModPrime(pivot, p);
     for (let r = c + 1; r < n; r++) {
-      let u = a[r * n + c];
+      const rowR = r * n;
+      let u = a[rowR + c];
       if (u === 0) continue;
       u = (u * pinvPivot) % p;
       const w = p - u;
       for (let j = c + 1; j < n; j++) {
         // same reduction as in charpolyHessenbergModP
-        let v = a[r * n + j] + w * a[c * n + j];
+        let v = a[rowR + j] + w * a[rowC + j];
         v -= Math.floor(v * pinv) * p;
         if (v < 0) v += p;
         else if (v >= p) v -= p;
-        a[r * n + j] = v;
+        a[rowR + j] = v;
       }
     }
   }
