@@ -5,6 +5,8 @@
 import type { Log, ReportingDescriptor, Result } from 'sarif';
 import type { CheckedDocument, TextProblem, VerdictKind } from '../checks/types';
 import { SAFETY_CAUTION } from '../checks/types';
+import { isAbsolute } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { LineIndex } from './lines';
 
 /** One claim as the JSON output shows it. Columns are 1-based; `endColumn` is exclusive. */
@@ -134,6 +136,15 @@ const RULES: ReportingDescriptor[] = [
   },
 ];
 
+/**
+ * A file's path as SARIF's `artifactLocation.uri` needs it: a URI reference, so spaces and
+ * non-ASCII letters are percent-encoded; paths outside the working folder become `file:` URIs.
+ */
+export function sarifUri(path: string): string {
+  if (isAbsolute(path)) return pathToFileURL(path).href;
+  return path.split('/').map(encodeURIComponent).join('/');
+}
+
 /** SARIF 2.1.0 for code-scanning consumers; holds are reported with kind "pass". */
 export function formatSarif(files: readonly CheckedFile[], version: string): Log {
   const results: Result[] = [];
@@ -146,6 +157,7 @@ export function formatSarif(files: readonly CheckedFile[], version: string): Log
   for (const file of files) {
     if (file.readError) continue;
     const index = new LineIndex(file.text);
+    const uri = sarifUri(file.path);
     for (const claim of file.result.claims) {
       const ruleId = `claim.${claim.verdict}`;
       const result: Result = {
@@ -155,7 +167,7 @@ export function formatSarif(files: readonly CheckedFile[], version: string): Log
         level: claim.verdict === 'fails' ? 'error' : claim.verdict === 'unchecked' ? 'warning' : 'none',
         message: { text: claim.message },
         locations: [
-          { physicalLocation: { artifactLocation: { uri: file.path }, region: region(index, claim.start, claim.end) } },
+          { physicalLocation: { artifactLocation: { uri }, region: region(index, claim.start, claim.end) } },
         ],
         properties: { code: claim.code, ...(claim.expected !== undefined ? { expected: claim.expected } : {}) },
       };
@@ -165,7 +177,7 @@ export function formatSarif(files: readonly CheckedFile[], version: string): Log
             description: { text: `Replace with ${claim.fix.text}` },
             artifactChanges: [
               {
-                artifactLocation: { uri: file.path },
+                artifactLocation: { uri },
                 replacements: [
                   {
                     deletedRegion: region(index, claim.fix.offset, claim.fix.offset + claim.fix.length),
@@ -186,7 +198,7 @@ export function formatSarif(files: readonly CheckedFile[], version: string): Log
         level: 'warning',
         message: { text: problem.message },
         locations: [
-          { physicalLocation: { artifactLocation: { uri: file.path }, region: region(index, problem.start, problem.end) } },
+          { physicalLocation: { artifactLocation: { uri }, region: region(index, problem.start, problem.end) } },
         ],
         properties: { code: problem.code },
       });
