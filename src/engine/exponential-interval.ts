@@ -120,12 +120,14 @@ export function expInterval(z: ComplexInterval): ComplexInterval {
   let term = ComplexInterval.fromRational(Rational.ONE, bits);
   let sum = term;
   let k = 1n;
-  // Stop when |w|^k/k! is below 2^−bits; |w| ≤ 1/2 so this takes at most `bits` terms.
+  // Stop when the term's enclosure is a few units of 2^−bits (outward rounding keeps a complex
+  // term's rectangle from shrinking below about ±2 units); |w| ≤ 1/2 so this takes at most
+  // about `bits` terms.
   for (;;) {
     term = term.mul(w).divInt(k);
     sum = sum.add(term);
     k++;
-    if (term.magnitude() <= 1n) break;
+    if (term.magnitude() <= 16n || k > BigInt(4 * bits)) break;
   }
   // Tail bound: next term ≤ |term|·|w|/k and the rest a geometric series with ratio ≤ 1/2.
   sum = sum.widen(2n * (term.magnitude() + 1n) + 2n);
