@@ -3,12 +3,13 @@ import type { TextRange } from './types.js';
 
 /** Stable problem codes of the document layer. */
 export const problemCodes = Object.freeze({
-  /** An opening math delimiter, math environment or math/notary fence without its closing partner. */
+  /**
+   * An opening math delimiter, math environment or math/notary fence without its closing partner
+   * (in LaTeX: none before the paragraph ends, since TeX allows no blank line in math).
+   */
   unterminatedMath: 'document.unterminated-math',
   /** A closing `\)`, `\]` or `\end{…}` of a math environment without an opening partner (LaTeX). */
   unmatchedClose: 'document.unmatched-close',
-  /** A blank line (paragraph break) inside LaTeX math, which TeX rejects. */
-  paragraphInMath: 'document.paragraph-in-math',
   /** A verbatim-like environment or `\verb` that is never closed (LaTeX). */
   unterminatedVerbatim: 'document.unterminated-verbatim',
   /** The LaTeX parser failed on a passage; it was scanned by the local fallback scanner. */

@@ -78,7 +78,8 @@ export function scanLatexFallback(text: string, from: number, to: number): Fallb
       start,
       end: contentStart,
     });
-    return 'breakAt' in result ? result.resume : contentStart;
+    // Without a blank line the math runs to the end of this passage, which ends a paragraph.
+    return 'breakAt' in result ? result.resume : to;
   };
 
   let i = from;
@@ -164,7 +165,7 @@ export function scanLatexFallback(text: string, from: number, to: number): Fallb
           i = result.closeAt + closer.length;
         } else {
           problems.push({ code: problemCodes.unterminatedMath, message: `\\begin{${environment}} has no \\end{${environment}} before the paragraph ends`, start, end: afterArgument });
-          i = 'breakAt' in result ? result.resume : afterArgument;
+          i = 'breakAt' in result ? result.resume : to;
         }
       } else {
         i = afterArgument;

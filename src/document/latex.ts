@@ -129,8 +129,10 @@ function walkNodes(walk: SpanWalk, nodes: LatexNode[]): SpanNext | undefined {
       case 'mathenv':
       case 'environment': {
         const name = environmentName(node) ?? '';
-        if (MATH_ENVIRONMENTS.has(name)) environmentRegion(walk, node, name);
-        else if (!VERBATIM_ENVIRONMENTS.has(name) && Array.isArray(node.content)) {
+        if (MATH_ENVIRONMENTS.has(name)) {
+          const next = environmentRegion(walk, node, name);
+          if (next) return next;
+        } else if (!VERBATIM_ENVIRONMENTS.has(name) && Array.isArray(node.content)) {
           const next = walkNodes(walk, node.content);
           if (next) return next;
         }
@@ -151,12 +153,8 @@ function walkNodes(walk: SpanWalk, nodes: LatexNode[]): SpanNext | undefined {
       case 'string': {
         if (typeof node.content === 'string' && node.content.includes('$')) {
           const at = startOf(walk, node) + node.content.indexOf('$');
-          walk.problems.push({
-            code: problemCodes.unterminatedMath,
-            message: '`$` opens math that is never closed',
-            start: at,
-            end: at + (walk.text[at + 1] === '$' ? 2 : 1),
-          });
+          const width = walk.text[at + 1] === '$' ? 2 : 1;
+          return unclosedAtParagraph(walk, at, at + width, width === 2 ? '$$' : '$', restOfParagraph(walk, at + width));
         }
         break;
       }
@@ -176,8 +174,7 @@ function macroOutcome(walk: SpanWalk, nodes: LatexNode[], i: number): SpanNext |
   const start = startOf(walk, node);
   const end = endOf(walk, node);
   if (name === '(' || name === '[') {
-    const closer = name === '(' ? '\\)' : '\\]';
-    walk.problems.push({ code: problemCodes.unterminatedMath, message: `\\${name} has no matching ${closer}`, start, end });
+    return unclosedAtParagraph(walk, start, end, `\\${name}`, restOfParagraph(walk, end));
   } else if (name === ')' || name === ']') {
     walk.problems.push({ code: problemCodes.unmatchedClose, message: `\\${name} closes math that was never opened`, start, end });
   } else if (name === 'verb' || name === 'verb*') {
@@ -205,12 +202,7 @@ function macroOutcome(walk: SpanWalk, nodes: LatexNode[], i: number): SpanNext |
       }
       return { kind: 'resume', at: closeAt + closing.length };
     } else if (MATH_ENVIRONMENTS.has(environment)) {
-      walk.problems.push({
-        code: problemCodes.unterminatedMath,
-        message: `\\begin{${environment}} has no \\end{${environment}} before the paragraph ends`,
-        start,
-        end: argumentEnd,
-      });
+      return unclosedAtParagraph(walk, start, argumentEnd, `\\begin{${environment}}`, restOfParagraph(walk, argumentEnd));
     }
   }
   return undefined;
@@ -243,24 +235,13 @@ function delimitedRegion(walk: SpanWalk, node: LatexNode): SpanNext | undefined 
   const contentEnd = Math.max(contentStart, end - width);
   const skips = closeRanges(commentRanges(walk, Array.isArray(node.content) ? node.content : []), contentStart, contentEnd);
   const paragraphBreak = findParagraphBreak(text, contentStart, contentEnd, skips);
-  if (paragraphBreak && (delimiter === '$' || delimiter === '$$')) {
-    walk.problems.push({
-      code: problemCodes.unterminatedMath,
-      message: `\`${delimiter}\` opens math that is not closed before the paragraph ends`,
-      start,
-      end: start + width,
-    });
-    return { kind: 'resume', at: paragraphBreak.resume };
-  }
-  if (paragraphBreak) {
-    walk.problems.push({ code: problemCodes.paragraphInMath, message: `a blank line inside ${delimiter}…: TeX ends the paragraph here`, start: paragraphBreak.at, end: paragraphBreak.resume });
-  }
+  if (paragraphBreak) return unclosedAtParagraph(walk, start, start + width, delimiter, paragraphBreak.resume);
   walk.regions.push({ kind: display ? 'display' : 'inline', delimiter, start, end, contentStart, contentEnd, skips });
   return undefined;
 }
 
 /** Adds the region of a math environment (`equation`, `align*`, …). */
-function environmentRegion(walk: SpanWalk, node: LatexNode, name: string): void {
+function environmentRegion(walk: SpanWalk, node: LatexNode, name: string): SpanNext | undefined {
   const { text } = walk;
   const start = startOf(walk, node);
   const end = endOf(walk, node);
@@ -275,10 +256,31 @@ function environmentRegion(walk: SpanWalk, node: LatexNode, name: string): void 
   if (contentEnd < contentStart) contentEnd = contentStart;
   const skips = closeRanges(commentRanges(walk, content), contentStart, contentEnd);
   const paragraphBreak = findParagraphBreak(text, contentStart, contentEnd, skips);
-  if (paragraphBreak) {
-    walk.problems.push({ code: problemCodes.paragraphInMath, message: `a blank line inside ${name}: TeX stops with an error here`, start: paragraphBreak.at, end: paragraphBreak.resume });
-  }
+  if (paragraphBreak) return unclosedAtParagraph(walk, start, text.indexOf('}', start) + 1, `\\begin{${name}}`, paragraphBreak.resume);
   walk.regions.push({ kind: MATH_ENVIRONMENTS.get(name)!, delimiter: 'env', environment: name, start, end, contentStart, contentEnd, skips });
+  return undefined;
+}
+
+/** Where TeX resumes text after math left open at `from`: the line after the next blank line. */
+function restOfParagraph(walk: SpanWalk, from: number): number {
+  return findParagraphBreak(walk.text, from, walk.documentEnd)?.resume ?? walk.documentEnd;
+}
+
+/**
+ * TeX ends math at a paragraph break (a blank line) with an error, whatever the opener; the
+ * grammar instead pairs the opener with a closer paragraphs later. We side with TeX: report the
+ * opener as unclosed and read on from the line after the blank one, so a later closer is reported
+ * as stray. This is also what the chunked scan sees when the break falls between two chunks, so
+ * the result does not depend on where chunks end.
+ */
+function unclosedAtParagraph(walk: SpanWalk, start: number, openerEnd: number, opener: string, resume: number): SpanNext {
+  walk.problems.push({
+    code: problemCodes.unterminatedMath,
+    message: `${opener} is not closed before the paragraph ends (TeX allows no blank line in math)`,
+    start,
+    end: openerEnd,
+  });
+  return { kind: 'resume', at: resume };
 }
 
 /**

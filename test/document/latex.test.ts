@@ -82,8 +82,20 @@ const rows: Row[] = [
     regions: [['inline', '$', ' c ']],
     problems: [['document.unterminated-math', '$'], ['document.unterminated-math', '$']],
   },
-  { name: 'blank line inside \\[', text: '\\[ a\n\nb \\]', regions: [['display', '\\[', ' a\n\nb ']], problems: [['document.paragraph-in-math', '\n']] },
-  { name: 'blank line inside equation', text: '\\begin{equation} a\n  \nb \\end{equation}', regions: [['display', 'env:equation', ' a\n  \nb ']], problems: [['document.paragraph-in-math', '  \n']] },
+  // TeX ends math at a blank line whatever the opener, so the closer after it is stray.
+  {
+    name: 'blank line inside \\[',
+    text: '\\[ a\n\nb \\] $c$',
+    regions: [['inline', '$', 'c']],
+    problems: [['document.unterminated-math', '\\['], ['document.unmatched-close', '\\]']],
+  },
+  {
+    name: 'blank line inside equation',
+    text: '\\begin{equation} a\n  \nb \\end{equation}',
+    regions: [],
+    problems: [['document.unterminated-math', '\\begin{equation}'], ['document.unmatched-close', '\\end{equation}']],
+  },
+  { name: 'a comment line is not a blank line', text: '\\[ a\n% note\nb \\]', regions: [['display', '\\[', ' a\n% note\nb ']] },
   { name: 'unclosed verbatim stops the scan', text: '$a$ \\begin{verbatim} $no$', regions: [['inline', '$', 'a']], problems: [['document.unterminated-verbatim', '\\begin{verbatim}']] },
   { name: 'unclosed \\verb ends at the line', text: '\\verb|x $no$\n$yes$', regions: [['inline', '$', 'yes']], problems: [['document.unterminated-verbatim', '\\verb|x $no$']] },
 ];
@@ -116,6 +128,25 @@ describe('LaTeX offsets', () => {
     const region = scanDocument(text, 'latex').regions[0];
     assert.equal(text.slice(region.contentStart, region.contentEnd), '\na &= b % why\n% \\end{align}\nc &= d\n');
     assert.equal(mathSource(text, region), '\na &= b      \n             \nc &= d\n');
+  });
+
+  it('gives the same result wherever the chunk boundaries fall', () => {
+    const note = [
+      'A $a$ and \\(b\\) with an open $c\n\nd$ e $f$ % $g$\n',
+      '\\begin{align} x\n\ny \\end{align}\n\\[ z \\]\n\n',
+      '\\begin{verbatim}\n$v$\n\n$w$\n\\end{verbatim}\n$h$ {\\bf $i$\n\n$j$}\n\n',
+    ].join('');
+    const body = note.repeat(12);
+    const reference = scanDocument(body, 'latex');
+    const shape = (result: ReturnType<typeof scanDocument>, shift: number) => ({
+      regions: result.regions.map((r) => [r.kind, r.delimiter, r.start - shift, r.contentStart - shift, r.contentEnd - shift, r.end - shift]),
+      problems: result.problems.map((p) => [p.code, p.start - shift, p.end - shift]),
+    });
+    assert.ok(reference.regions.length > 12 * 5);
+    for (let pad = 1; pad <= 400; pad += 37) {
+      const filler = 'w'.repeat(pad) + '\n\n';
+      assert.deepEqual(shape(scanDocument(filler + body, 'latex'), filler.length), shape(reference, 0), `with ${pad} characters before`);
+    }
   });
 
   it('finds the same regions in a long note scanned in many chunks', () => {

@@ -76,6 +76,24 @@ describe('scanning mutated notes', () => {
     });
   }
 
+  it('gives the same LaTeX result wherever the chunk boundaries fall (100 mutants)', () => {
+    const next = random(4242);
+    const body = latexNote.slice(latexNote.indexOf('\\begin{document}') + '\\begin{document}'.length).repeat(3);
+    const shape = (text: string, shift: number) => {
+      const result = scanDocument(text, 'latex');
+      return {
+        regions: result.regions.map((r) => [r.kind, r.delimiter, r.start - shift, r.contentStart - shift, r.contentEnd - shift, r.end - shift]),
+        problems: result.problems.map((p) => [p.code, p.start - shift, p.end - shift]),
+      };
+    };
+    for (let i = 0; i < 100; i++) {
+      const text = mutate(body, next);
+      if (text.includes('\\begin{document}')) continue; // a new preamble would move the body.
+      const filler = 'w'.repeat(Math.floor(next() * 1200)) + '\n\n';
+      assert.deepEqual(shape(filler + text, filler.length), shape(text, 0), `mutant ${i}: ${JSON.stringify(text)}`);
+    }
+  });
+
   it('finds the unmutated notes exactly', () => {
     const md = scanDocument(markdownNote, 'markdown');
     assert.equal(md.problems.length, 0);
