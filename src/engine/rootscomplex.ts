@@ -19,6 +19,9 @@ import { Rational } from './rational';
 import { type IntPoly, ceilSqrt } from './intpoly';
 import { type Disk, disksIntersect } from './disk';
 
+/** Precision ceiling: roots closer than about 2^-MAX_BITS are refused rather than chased forever. */
+const MAX_BITS = 1 << 16;
+
 interface Approximation {
   re: bigint;
   im: bigint;
@@ -201,8 +204,8 @@ export class ComplexRootLocator {
     const smallEnough = (disks: Disk[]) => !maxRadius || disks.every((d) => d.radius.compare(maxRadius) <= 0);
     // The last certified set may already be fine enough (refining roots one after another).
     if (this.disks.length > 0 && smallEnough(this.disks)) return this.disks;
-    for (let attempt = 0; attempt < 40; attempt++) {
-      budget?.tick(n * n * 8);
+    for (let attempt = 0; attempt < 40 && this.bits <= MAX_BITS; attempt++) {
+      budget?.tick(n * n * Math.ceil(this.bits / 8));
       const disks = certifiedDisks(this.poly, this.z, this.bits);
       const acceptable = disks !== undefined && this.acceptable(disks);
       if (acceptable && smallEnough(disks)) {
@@ -226,7 +229,7 @@ export class ComplexRootLocator {
       this.bits = newBits;
       fixedAberth(this.poly, this.z, this.bits, rounds);
     }
-    throw new BudgetError('complex root certification did not converge');
+    throw new BudgetError(`complex root certification did not converge within ${MAX_BITS} bits`);
   }
 
   private acceptable(disks: Disk[]): boolean {

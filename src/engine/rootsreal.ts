@@ -179,8 +179,9 @@ function rootBoundExponent(p: IntPoly): number {
   const lead = p[p.length - 1];
   let maxBits = 0;
   for (let i = 0; i < p.length - 1; i++) maxBits = Math.max(maxBits, bitLength(p[i]));
-  // 1 + max|a_i|/|a_n| < 2^(maxBits − bits(a_n) + 2).
-  return Math.max(0, maxBits - bitLength(lead) + 2);
+  // |a_i| < 2^maxBits and |a_n| ≥ 2^(bits(a_n) − 1), so 1 + max|a_i/a_n| < 1 + 2^(maxBits − bits(a_n) + 1),
+  // which is below 2^max(1, maxBits − bits(a_n) + 2).
+  return Math.max(1, maxBits - bitLength(lead) + 2);
 }
 
 /** Roots in (0, 2^k) as intervals, via Descartes on dyadic subintervals of (0, 1). */
