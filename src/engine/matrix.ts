@@ -9,7 +9,7 @@
  */
 import { Budget, NotSquareError, ShapeError } from './errors';
 import type { Ring } from './field';
-import { embedding, unifyDomains } from './matrix-domains';
+import { ZZ, embedding, unifyDomains } from './matrix-domains';
 
 /** An immutable rows×cols matrix over `domain`, entries row-major. */
 export class Matrix<T> {
@@ -56,6 +56,19 @@ export class Matrix<T> {
     const entries: T[] = new Array(rows * cols);
     for (let i = 0; i < rows; i++) for (let j = 0; j < cols; j++) entries[i * cols + j] = f(i, j);
     return Matrix.fromEntries(domain, rows, cols, entries);
+  }
+
+  /** An integer matrix over Z from rows of numbers or bigints (numbers must be safe integers). */
+  static fromIntegerRows(rowList: readonly (readonly (number | bigint)[])[]): Matrix<bigint> {
+    return Matrix.fromRows(
+      ZZ,
+      rowList.map((row) =>
+        row.map((x) => {
+          if (typeof x === 'number' && !Number.isSafeInteger(x)) throw new ShapeError(`${x} is not an exact integer entry`);
+          return BigInt(x);
+        }),
+      ),
+    );
   }
 
   /** The n×n identity matrix. */

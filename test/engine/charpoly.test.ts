@@ -4,7 +4,10 @@ import { test } from 'node:test';
 import assert from 'node:assert/strict';
 import { Matrix } from '../../src/engine/matrix';
 import { ZZ } from '../../src/engine/matrix-domains';
-import { determinantBareiss } from '../../src/engine/matrix-elimination';
+import { determinantBareiss, rank } from '../../src/engine/matrix-elimination';
+import { NumberField } from '../../src/engine/numberfield';
+import { spectrum } from '../../src/engine/spectrum';
+import { Budget, BudgetError, ShapeError } from '../../src/engine/errors';
 import {
   charpolyBerkowitz,
   charpolyCoefficients,
@@ -102,4 +105,32 @@ test('CRT and bound helpers', () => {
   const x = -123456789012345678901234567n;
   const residues = ps.map((p) => Float64Array.of(Number(((x % BigInt(p)) + BigInt(p)) % BigInt(p))));
   assert.equal(reconstructCRT(residues, ps)[0], x);
+});
+
+test('Berkowitz over Q(i): [[i, 1], [0, −i]] has χ = x² + 1; trace and det agree (common practice)', () => {
+  const gauss = NumberField.gaussian();
+  const i = gauss.generator;
+  const a = Matrix.fromRows(gauss, [[i, gauss.one], [gauss.zero, gauss.neg(i)]]);
+  const chi = charpolyCoefficients(a);
+  assert.deepEqual(chi.map((c) => gauss.toString(c)), ['1', '0', '1']);
+  assert.ok(gauss.equals(determinant(a), gauss.one));
+  assert.ok(gauss.isZero(a.trace()));
+  // conjugate transpose with complex conjugation a + b i ↦ a − b i
+  const conj = (z: Poly) => gauss.element([z.coeff(0), z.coeff(1).neg()]);
+  const h = a.conjugateTranspose(conj);
+  assert.ok(gauss.equals(h.get(0, 0), gauss.neg(i)) && gauss.equals(h.get(1, 0), gauss.one));
+});
+
+test('budgets: a spent step budget stops charpoly, det, rank and spectrum with BudgetError', () => {
+  const big = Matrix.build(ZZ, 14, 14, (i, j) => BigInt(((i * 7 + j * 3) % 11) - 5));
+  const tiny = () => new Budget({ maxSteps: 50 });
+  assert.throws(() => charpolyCoefficients(big, tiny()), BudgetError);
+  assert.throws(() => charpolyBerkowitz(big, tiny()), BudgetError);
+  assert.throws(() => determinant(big, tiny()), BudgetError);
+  assert.throws(() => determinantBareiss(big, tiny()), BudgetError);
+  assert.throws(() => rank(big, tiny()), BudgetError);
+  assert.throws(() => spectrum(big, tiny()), BudgetError);
+  assert.throws(() => spectrum(big, new Budget({ isCancelled: () => true })), BudgetError);
+  assert.equal(Matrix.fromIntegerRows([[1, 2], [3, 4]]).toString(), '[[1, 2], [3, 4]]');
+  assert.throws(() => Matrix.fromIntegerRows([[1.5]]), ShapeError);
 });
