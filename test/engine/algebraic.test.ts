@@ -116,3 +116,28 @@ test('number-field elements map to algebraic numbers under each embedding; size 
   const b = A.rootOf(P(-3, ...new Array(10).fill(0), 1), 0);
   assert.throws(() => a.add(b), /resultant/);
 });
+
+test('field identities on seeded random quadratic irrationals (common practice, no source)', () => {
+  let s = 2024;
+  const rnd = (k: number) => ((s = (Math.imul(s, 1103515245) + 12345) >>> 0) % k);
+  const pick = () => A.fromRadical({ a: q(rnd(9) - 4, 1 + rnd(3)), b: q(1 + rnd(5), 1 + rnd(2)), d: [2n, 3n, 5n, -1n, -3n][rnd(5)] });
+  for (let k = 0; k < 8; k++) {
+    const a = pick();
+    const b = pick();
+    assert.ok(a.add(b).sub(b).equals(a), `case ${k}: (a + b) − b = a for ${a} and ${b}`);
+    assert.ok(a.mul(b).div(b).equals(a), `case ${k}: (a·b)/b = a`);
+    assert.ok(a.mul(b).equals(b.mul(a)), `case ${k}: ab = ba`);
+    assert.ok(a.sub(a).isZero());
+    // |a|² is real and non-negative, and equals re² + im².
+    const abs2 = a.absSquared();
+    assert.ok(abs2.isReal() && abs2.sign() > 0);
+    assert.ok(abs2.equals(a.re().mul(a.re()).add(a.im().mul(a.im()))), `case ${k}: |a|² = re² + im²`);
+  }
+});
+
+test('bad input gets typed errors', () => {
+  assert.throws(() => A.fromInt(0).inv(), /division by zero/);
+  assert.throws(() => A.rootOf(P(-2, 0, 1), 5), /out of range/);
+  assert.throws(() => A.i().sign(), /not defined/);
+  assert.throws(() => A.nthRoot(q(2), 0), /positive integer/);
+});

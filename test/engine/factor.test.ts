@@ -7,6 +7,7 @@ import { spawnSync } from 'node:child_process';
 import { factorOverQ, isIrreducibleOverQ } from '../../src/engine/factor';
 import { Poly } from '../../src/engine/poly';
 import { Rational } from '../../src/engine/rational';
+import { Budget, BudgetError } from '../../src/engine/errors';
 
 /** Reads "x^8 - 11*x^7 + 3*x - 5" (the oracle's plain-text style) into a Poly. */
 function parsePoly(text: string): Poly {
@@ -198,4 +199,10 @@ test('random products of random factors agree with SymPy factor_list', { skip: s
     const theirs = expected[i].slice().sort((a, b) => (JSON.stringify(a) < JSON.stringify(b) ? -1 : 1));
     assert.deepEqual(mine, theirs, `case ${i} (seed ${(i + 1) * 7919}): ${p.toString()}`);
   });
+});
+
+test('a spent step budget stops factoring with a typed error', () => {
+  // Swinnerton-Dyer degree 16 needs many recombination steps; ten steps are not enough.
+  const s4 = swinnertonDyer([2, 3, 5, 7]);
+  assert.throws(() => factorOverQ(s4, new Budget({ maxSteps: 10 })), (e: unknown) => e instanceof BudgetError);
 });
