@@ -10,7 +10,7 @@ export const problemCodes = Object.freeze({
   unterminatedMath: 'document.unterminated-math',
   /** A closing `\)`, `\]` or `\end{…}` of a math environment without an opening partner (LaTeX). */
   unmatchedClose: 'document.unmatched-close',
-  /** A verbatim-like environment or `\verb` that is never closed (LaTeX). */
+  /** A verbatim-like environment, `\verb` or `\iffalse` that is never closed (LaTeX). */
   unterminatedVerbatim: 'document.unterminated-verbatim',
   /** The LaTeX parser failed on a passage; it was scanned by the local fallback scanner. */
   parserFallback: 'document.parser-fallback',

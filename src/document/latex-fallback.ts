@@ -11,7 +11,7 @@
  */
 import type { MathRegion, Problem, TextRange } from './types.js';
 import { problemCodes } from './common.js';
-import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, lineEndAt } from './latex-vocabulary.js';
+import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, lineEndAt, skipFalseConditional } from './latex-vocabulary.js';
 
 /** Regions and problems of one passage; `stopped` when `\end{document}` or an endless verbatim ended it. */
 export interface FallbackResult {
@@ -113,6 +113,15 @@ export function scanLatexFallback(text: string, from: number, to: number): Fallb
           problems.push({ code: problemCodes.unterminatedVerbatim, message: '\\verb is not closed on its line', start: i, end: lineEnd });
           i = lineEnd;
         } else i = close + 1;
+        continue;
+      }
+      if (name === 'iffalse') {
+        const resume = skipFalseConditional(text, j, to);
+        if (resume === undefined) {
+          problems.push({ code: problemCodes.unterminatedVerbatim, message: '\\iffalse has no matching \\fi; nothing after it is scanned', start: i, end: j });
+          return { regions, problems, stopped: true };
+        }
+        i = resume;
         continue;
       }
       if (name !== 'begin' && name !== 'end') {

@@ -102,3 +102,42 @@ export function nextParagraphStart(text: string, from: number, end: number): num
   const found = findParagraphBreak(text, from, end);
   return found ? found.resume : end;
 }
+
+/**
+ * Where text resumes after `\iffalse` whose name ends at `from`: after the matching `\else` (its
+ * branch is typeset) or `\fi`, counting nested conditionals (`\if…` macros, except the ifthen
+ * package's `\ifthenelse`, which is a command), and ignoring `%` comments and escaped characters.
+ * Undefined when no matching `\fi` comes before `end` (TeX reports an incomplete conditional).
+ */
+export function skipFalseConditional(text: string, from: number, end: number): number | undefined {
+  let depth = 0;
+  let i = from;
+  while (i < end) {
+    const c = text[i];
+    if (c === '%') {
+      i = lineEndAt(text, i, end);
+      continue;
+    }
+    if (c !== '\\') {
+      i++;
+      continue;
+    }
+    let j = i + 1;
+    while (j < end && /[A-Za-z]/.test(text[j])) j++;
+    if (j === i + 1) {
+      i += 2;
+      continue;
+    }
+    const name = text.slice(i + 1, j);
+    if (name === 'fi') {
+      if (depth === 0) return j;
+      depth--;
+    } else if (name === 'else' && depth === 0) {
+      return j;
+    } else if (name.startsWith('if') && name !== 'ifthenelse') {
+      depth++;
+    }
+    i = j;
+  }
+  return undefined;
+}

@@ -5,14 +5,21 @@
  * The document body is scanned (after `\begin{document}`, up to `\end{document}`); a file without
  * `\begin{document}` is a fragment and scanned whole. The body is parsed in chunks of whole
  * paragraphs: TeX ends every kind of math at a paragraph break, so a chunk boundary at a blank
- * line never cuts a region, and it keeps the (slow, memory-hungry) grammar on small inputs. When a
- * `$` is left open, the grammar pairs it with a `$` paragraphs later; we detect the paragraph
- * break inside the region, report the open `$`, and parse again from the line after the break,
- * which is where TeX itself resumes.
+ * line never cuts a region, and it keeps the (slow, memory-hungry) grammar on small inputs.
+ *
+ * Math left open follows TeX too: the grammar would pair an open `$` with a `$` paragraphs later
+ * (and an open `\[` or `\begin{align}` with a closer after a blank line), so whenever a region
+ * holds a paragraph break, or an opener has no closer at all, we report the opener, skip to the
+ * line after the next blank line (where TeX resumes text) and parse again from there. A closer
+ * met later is then reported as stray. Because chunks also end at blank lines, the result does
+ * not depend on where the chunks fall (a test shifts them to check).
+ *
+ * `\iffalse … \fi` is skipped as TeX skips it. Not handled: other conditionals, catcode
+ * changes, and math produced by user macros.
  */
 import type { MathRegion, Problem, ScanResult, TextRange } from './types.js';
 import { closeRanges, problemCodes } from './common.js';
-import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, findParagraphBreak, lineEndAt, nextParagraphStart } from './latex-vocabulary.js';
+import { MATH_ENVIRONMENTS, VERBATIM_ENVIRONMENTS, findParagraphBreak, lineEndAt, nextParagraphStart, skipFalseConditional } from './latex-vocabulary.js';
 import { type LatexNode, environmentName, groupText, parseLatexNodes } from './latex-parse.js';
 import { scanLatexFallback } from './latex-fallback.js';
 
@@ -90,7 +97,7 @@ function scanSpan(walk: SpanWalk, from: number, to: number): SpanNext {
 }
 
 /** Markers without which a passage can hold neither math nor a problem we report. */
-const MATH_MARKERS = ['$', '\\(', '\\[', '\\)', '\\]', '\\begin', '\\end', '\\verb'];
+const MATH_MARKERS = ['$', '\\(', '\\[', '\\)', '\\]', '\\begin', '\\end', '\\verb', '\\iffalse'];
 
 /** Prose-only paragraphs are common and the grammar is slow, so they are not parsed at all. */
 function mayHoldMath(passage: string): boolean {
@@ -177,6 +184,14 @@ function macroOutcome(walk: SpanWalk, nodes: LatexNode[], i: number): SpanNext |
     return unclosedAtParagraph(walk, start, end, `\\${name}`, restOfParagraph(walk, end));
   } else if (name === ')' || name === ']') {
     walk.problems.push({ code: problemCodes.unmatchedClose, message: `\\${name} closes math that was never opened`, start, end });
+  } else if (name === 'iffalse') {
+    // \iffalse … \fi is the usual way to switch a passage off; TeX skips it, so do we.
+    const resume = skipFalseConditional(text, end, walk.documentEnd);
+    if (resume === undefined) {
+      walk.problems.push({ code: problemCodes.unterminatedVerbatim, message: '\\iffalse has no matching \\fi; nothing after it is scanned', start, end });
+      return { kind: 'stop' };
+    }
+    return { kind: 'resume', at: resume };
   } else if (name === 'verb' || name === 'verb*') {
     // The grammar leaves an unclosed \verb as a bare macro; TeX ends \verb at the line end.
     const lineEnd = lineEndAt(text, end, walk.documentEnd);

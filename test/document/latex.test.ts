@@ -62,6 +62,9 @@ const rows: Row[] = [
   { name: '\\verb', text: '\\verb|$no$| \\verb*+\\(no+ $yes$', regions: [['inline', '$', 'yes']] },
   { name: '\\lstinline and \\mintinline', text: '\\lstinline|$no$| \\mintinline{py}{$no$} $yes$', regions: [['inline', '$', 'yes']] },
   { name: 'verbatim with blank lines', text: '\\begin{verbatim}\n$no\n\nno$\n\\end{verbatim}\n\n$yes$', regions: [['inline', '$', 'yes']] },
+  { name: '\\iffalse … \\fi', text: '\\iffalse $no$\n\n\\ifx\\a\\b $no$ \\fi \\[no\\] % \\fi\n\\fi $yes$', regions: [['inline', '$', 'yes']] },
+  { name: '\\iffalse … \\else keeps the else branch', text: '\\iffalse $no$ \\else $yes$ \\fi $too$', regions: [['inline', '$', 'yes'], ['inline', '$', 'too']] },
+  { name: '\\iffalse without \\fi', text: '$a$ \\iffalse $no$', regions: [['inline', '$', 'a']], problems: [['document.unterminated-verbatim', '\\iffalse']] },
   {
     name: 'preamble and after \\end{document}',
     text: '\\documentclass{article}\n\\newcommand{\\R}{$\\mathbb{R}$}\n\\begin{document}\n$yes$\n\\end{document}\n$after$',

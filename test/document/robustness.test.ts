@@ -38,7 +38,7 @@ const latexNote = [
   '\\begin{alignat}{2} a &= b \\end{alignat}\n\\end{document}\n',
 ].join('');
 
-const insertions = ['$', '$$', '\\(', '\\)', '\\[', '\\]', '\\begin{align}', '\\end{align}', '\\begin{verbatim}', '```', '```notary\n', '~~~', '`', '<!--', '-->', '---\n', '%', '\\verb|', '\\', '\n', '\n\n', '\r\n', '> ', '    ', '😀', 'é', '{', '}', '&', '\\\\', '\\end{document}', '\\begin{document}'];
+const insertions = ['$', '$$', '\\(', '\\)', '\\[', '\\]', '\\begin{align}', '\\end{align}', '\\begin{verbatim}', '```', '```notary\n', '~~~', '`', '<!--', '-->', '---\n', '%', '\\verb|', '\\', '\n', '\n\n', '\r\n', '> ', '    ', '😀', 'é', '{', '}', '&', '\\\\', '\\end{document}', '\\begin{document}', '\\iffalse', '\\fi', '\\else'];
 
 function mutate(text: string, next: () => number): string {
   let out = text;
@@ -113,7 +113,7 @@ describe('scanning mutated notes', () => {
 describe('local LaTeX scanner', () => {
   it('agrees with the parser-driven scanner on well-formed notes', () => {
     const body = latexNote.slice(latexNote.indexOf('\\begin{document}') + '\\begin{document}'.length);
-    const notes = [body, body.repeat(5), 'a $x$ \\[y\\] \\begin{gather*} z \\end{gather*} % $c$\n\\(w\\) \\lstinline'];
+    const notes = [body + '\\iffalse $x$ \\ifx a $y$ \\fi \\else $z$ \\fi', body.repeat(5), 'a $x$ \\[y\\] \\begin{gather*} z \\end{gather*} % $c$\n\\(w\\) \\lstinline'];
     for (const note of notes.slice(0, 2)) {
       const parsed = scanDocument(note, 'latex');
       const local = scanLatexFallback(note, 0, note.length);
