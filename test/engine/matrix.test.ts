@@ -100,3 +100,26 @@ test('unify lifts Z to Q; shapes are checked', () => {
   assert.equal(d.toString(), '[[1, 2, 0], [3, 4, 0], [0, 0, 7]]');
   assert.equal(determinantBareiss(d), -14n);
 });
+
+test('fraction-free inverse: A·A⁻¹ = A⁻¹·A = I on seeded random Z and Q matrices, singular ones refused', () => {
+  let seed = 99;
+  const rand = (k: number) => {
+    seed = (seed * 1103515245 + 12345) % 2147483648;
+    return seed % k;
+  };
+  let inverted = 0;
+  for (let trial = 0; trial < 60; trial++) {
+    const n = 1 + (trial % 7);
+    const rational = trial % 2 === 1;
+    const m = Matrix.build(QQ, n, n, () => (rational ? q(rand(13) - 6, 1 + rand(4)) : q(rand(7) - 3)));
+    if (determinantBareiss(m).isZero()) {
+      assert.throws(() => inverse(m), SingularError);
+      continue;
+    }
+    const mi = inverse(m);
+    assert.ok(m.mul(mi).equals(Matrix.identity(QQ, n)), `trial ${trial}`);
+    assert.ok(mi.mul(m).equals(Matrix.identity(QQ, n)), `trial ${trial}`);
+    inverted++;
+  }
+  assert.ok(inverted > 40);
+});
