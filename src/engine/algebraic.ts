@@ -235,26 +235,35 @@ export class AlgebraicNumber {
     if (this.isReal()) return this;
     return AlgebraicNumber.pick(this.minimalPolynomial, true, (d) => diskConj(this.disk(d)));
   }
-  /** Real part (α + ᾱ)/2. */
+  /** Real part (α + ᾱ)/2 (read off the radical form for a non-real quadratic). */
   re(): AlgebraicNumber {
     if (this.isReal()) return this;
+    if (this.degree() === 2) return AlgebraicNumber.fromRational(this.toRadical()!.a);
     return this.add(this.conj()).scale(Rational.of(1, 2));
   }
   /** Imaginary part (α − ᾱ)/(2i), a real algebraic number. */
   im(): AlgebraicNumber {
     if (this.isReal()) return AlgebraicNumber.fromInt(0);
+    if (this.degree() === 2) {
+      // a + b√d with d < 0: the imaginary part is b√|d|.
+      const { b, d } = this.toRadical()!;
+      return d === -1n ? AlgebraicNumber.fromRational(b) : AlgebraicNumber.fromRadical({ a: Rational.ZERO, b, d: -d });
+    }
     return this.sub(this.conj()).mul(AlgebraicNumber.i()).scale(Rational.of(-1, 2));
   }
-  /** |α|² = α·ᾱ. */
+  /** |α|² = α·ᾱ (for a non-real quadratic, the constant term of its minimal polynomial). */
   absSquared(): AlgebraicNumber {
-    return this.isReal() ? this.mul(this) : this.mul(this.conj());
+    if (this.isReal()) return this.mul(this);
+    if (this.degree() === 2) return AlgebraicNumber.fromRational(this.minimalPolynomial.coeff(0));
+    return this.mul(this.conj());
   }
 
   private shift(q: Rational): AlgebraicNumber {
     const f = this.minimalPolynomial.compose(Poly.fromRationals([q.neg(), Rational.ONE]));
     return AlgebraicNumber.pick(f, true, (d) => diskAdd(this.disk(d), pointDisk(q)));
   }
-  private scale(q: Rational): AlgebraicNumber {
+  /** q·this for a rational q (the minimal polynomial rescaled; no resultant needed). */
+  scale(q: Rational): AlgebraicNumber {
     if (q.isZero()) return AlgebraicNumber.fromInt(0);
     const f = this.minimalPolynomial.compose(Poly.fromRationals([Rational.ZERO, q.inv()])).monic();
     return AlgebraicNumber.pick(f, true, (d) => {

@@ -141,3 +141,16 @@ test('bad input gets typed errors', () => {
   assert.throws(() => A.i().sign(), /not defined/);
   assert.throws(() => A.nthRoot(q(2), 0), /positive integer/);
 });
+
+test('real and imaginary parts of a cubic’s complex roots agree with the resultant route', () => {
+  // x^3 − 2: complex roots ∛2·(−1/2 ± (√3/2) i); Re = −∛2/2, Im² = 3∛4/4, |·|² = ∛4
+  // (common practice, no source). Degree 3 takes the general (resultant) route.
+  const roots = A.rootsOf(P(-2, 0, 0, 1)).map((r) => r.value).filter((r) => !r.isReal());
+  const cbrt2 = A.nthRoot(q(2), 3);
+  for (const z of roots) {
+    assert.ok(z.re().equals(cbrt2.scale(q(-1, 2))));
+    assert.ok(z.im().mul(z.im()).equals(cbrt2.mul(cbrt2).scale(q(3, 4))));
+    assert.ok(z.absSquared().equals(cbrt2.mul(cbrt2)));
+  }
+  assert.equal(roots[0].im().sign() * roots[1].im().sign(), -1);
+});
