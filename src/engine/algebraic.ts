@@ -94,6 +94,10 @@ export class AlgebraicNumber {
     }
     throw new DomainError('no real root found'); // unreachable: x^n − q has one of that sign
   }
+  /** a + b√d, rational when b = 0. */
+  private static fromQuadratic(a: Rational, b: Rational, d: bigint): AlgebraicNumber {
+    return b.isZero() ? AlgebraicNumber.fromRational(a) : AlgebraicNumber.fromRadical({ a, b, d });
+  }
   /** a + b√d (d < 0 meaning b√|d|·i). */
   static fromRadical(r: RadicalForm): AlgebraicNumber {
     // x² − d is irreducible for square-free d ≠ 1; its root √d (or √|d|·i) is picked by sign.
@@ -176,6 +180,8 @@ export class AlgebraicNumber {
     if (o.rational) return this.shift(o.rational);
     if (this.rational) return o.shift(this.rational);
     if (this.equals(o)) return this.scale(Rational.fromInt(2));
+    const same = sameQuadraticField(this, o);
+    if (same) return AlgebraicNumber.fromQuadratic(same[0].a.add(same[1].a), same[0].b.add(same[1].b), same[0].d);
     checkResultantSize(this.minimalPolynomial, o.minimalPolynomial);
     return AlgebraicNumber.pick(sumRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => diskAdd(this.disk(d + 1), o.disk(d + 1)));
   }
@@ -187,6 +193,13 @@ export class AlgebraicNumber {
     if (o.rational) return this.scale(o.rational);
     if (this.rational) return o.scale(this.rational);
     if (this.equals(o)) return this.pow(2);
+    const same = sameQuadraticField(this, o);
+    if (same) {
+      // (a1 + b1√d)(a2 + b2√d) = (a1a2 + b1b2·d) + (a1b2 + a2b1)√d.
+      const [x, y] = same;
+      const d = Rational.fromInt(x.d);
+      return AlgebraicNumber.fromQuadratic(x.a.mul(y.a).add(x.b.mul(y.b).mul(d)), x.a.mul(y.b).add(y.a.mul(x.b)), x.d);
+    }
     checkResultantSize(this.minimalPolynomial, o.minimalPolynomial);
     return AlgebraicNumber.pick(productRootsPoly(this.minimalPolynomial, o.minimalPolynomial), false, (d) => {
       const a = this.disk(d + 2);
@@ -399,6 +412,14 @@ export class AlgebraicNumber {
     // Certified non-real disks miss the real axis, so the centre's sign is the root's.
     return d.im.sign();
   }
+}
+
+/** Both numbers' radical forms when they lie in the same quadratic field Q(√d). */
+function sameQuadraticField(x: AlgebraicNumber, y: AlgebraicNumber): [RadicalForm, RadicalForm] | undefined {
+  if (x.degree() !== 2 || y.degree() !== 2) return undefined;
+  const a = x.toRadical()!;
+  const b = y.toRadical()!;
+  return a.d === b.d ? [a, b] : undefined;
 }
 
 function isqrtExact(n: bigint): bigint {

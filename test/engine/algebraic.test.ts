@@ -154,3 +154,17 @@ test('real and imaginary parts of a cubic’s complex roots agree with the resul
   }
   assert.equal(roots[0].im().sign() * roots[1].im().sign(), -1);
 });
+
+test('the same-field shortcut agrees with arithmetic in the number field Q(√5)', () => {
+  // (3 + 2√5)(−1 + √5) = 7 + √5 and (3 + 2√5) + (−1 + √5) = 2 + 3√5, both by hand and in Q[x]/(x² − 5).
+  const K = new NumberField(P(-5, 0, 1));
+  const positiveRoot = A.rootOf(P(-5, 0, 1), 1); // +√5 (roots in increasing order)
+  assert.equal(positiveRoot.sign(), 1);
+  const x = A.fromRadical({ a: q(3), b: q(2), d: 5n });
+  const y = A.fromRadical({ a: q(-1), b: q(1), d: 5n });
+  const product = K.mul(K.element(P(3, 2)), K.element(P(-1, 1)));
+  assert.ok(x.mul(y).equals(A.fromFieldElement(K, product, 1)));
+  assert.equal(x.mul(y).toLatex(), '7 + \\sqrt{5}');
+  assert.ok(x.add(y).equals(A.fromFieldElement(K, K.add(K.element(P(3, 2)), K.element(P(-1, 1))), 1)));
+  assert.ok(x.div(y).mul(y).equals(x));
+});
