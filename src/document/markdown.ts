@@ -86,7 +86,7 @@ export function scanMarkdown(text: string): ScanResult {
         containers.push(token);
       } else if (LINK_PART_TYPES.has(type)) {
         linkPartDepth++;
-      } else if (type === 'data' && !open && linkPartDepth === 0 && containers.length > 0) {
+      } else if (type === 'data' && !open && !pending && linkPartDepth === 0 && containers.length > 0) {
         loneDollarProblems(text, token, problems);
       } else if (type === 'characterEscape' && linkPartDepth === 0 && containers.length > 0) {
         const escaped = text[token.start.offset + 1];

@@ -65,6 +65,7 @@ const rows: Row[] = [
   { name: 'unclosed notary fence', text: '```notary\nA = 1\n', regions: [['notary', 'fence-notary', 'A = 1']], problems: [['document.unterminated-math', '```notary']] },
   { name: 'lone dollar is text', text: 'it costs $5.', regions: [] },
   { name: 'lone dollar before a command is unclosed math', text: 'so $\\det A = 4 holds.\n\nPay \\$\\{x\\}.', regions: [], problems: [['document.unterminated-math', '$']] },
+  { name: 'a dollar inside \\( is not a lone dollar', text: '\\( a $\\b \\)', regions: [['inline', '\\(', ' a $\\b ']] },
   { name: 'closing fence with trailing blanks', text: '$$\nA\n$$  \n```math\nB\n```\t\n', regions: [['display', '$$', 'A'], ['display', 'fence-math', 'B']] },
   { name: 'a longer closing fence closes', text: '$$\nA\n$$$\n', regions: [['display', '$$', 'A']] },
   { name: 'text after $$ is not a closing fence', text: '$$\nA\n$$ no\n$$\n', regions: [['display', '$$', 'A\n$$ no']] },
