@@ -192,7 +192,13 @@ export async function startEditor({ name, workspaceSources, extension = 'install
   };
   Object.assign(childEnv, typeof env === 'function' ? env(runDir) : {});
   const workspace = makeWorkspace(runDir, workspaceSources);
-  const source = extension === 'install' ? installExtension({ extensionsDir, userDataDir, configFile, env: childEnv }) : null;
+  let source = null;
+  try {
+    if (extension === 'install') source = installExtension({ extensionsDir, userDataDir, configFile, env: childEnv });
+  } catch (error) {
+    rmSync(runDir, { recursive: true, force: true });
+    throw error;
+  }
 
   const logPath = join(runDir, 'code-server.log');
   const logStream = createWriteStream(logPath);

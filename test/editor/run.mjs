@@ -45,16 +45,25 @@ if (setupError) {
 } else {
   if (values.only !== 'ui') {
     console.log('extension-host tests (code-server, extensionTestsPath)…');
-    const host = await runHostTests({ only: values.grep });
-    report('host', host.outcomes);
-    console.log(`host run: code-server listening after ${seconds(host.timings.serverStartMs)}, whole host run ${seconds(host.timings.totalMs)}`);
+    try {
+      const host = await runHostTests({ only: values.grep });
+      report('host', host.outcomes);
+      console.log(`host run: code-server listening after ${seconds(host.timings.serverStartMs)}, whole host run ${seconds(host.timings.totalMs)}`);
+    } catch (error) {
+      // The editor itself could not be started: one failure, with the reason (and its log).
+      report('host', [{ name: 'start the editor for the extension-host suite', ok: false, ms: 0, error: error.stack ?? String(error) }]);
+    }
   }
   if (values.only !== 'host') {
     console.log('UI tests (Chromium + playwright-core)…');
-    const ui = await runUiTests({ updateScreenshots: values['update-screenshots'] });
-    report('ui', ui.outcomes);
-    console.log(`UI run: cold start to workbench with the folder open ${seconds(ui.timings.coldStartMs)}, whole UI run ${seconds(ui.timings.totalMs)}`);
-    if (ui.screenshots.length) console.log(`screenshots: ${ui.screenshots.join(', ')}${values['update-screenshots'] ? ' (copied to media/screenshots/ when all passed)' : ''}`);
+    try {
+      const ui = await runUiTests({ updateScreenshots: values['update-screenshots'] });
+      report('ui', ui.outcomes);
+      console.log(`UI run: cold start to workbench with the folder open ${seconds(ui.timings.coldStartMs)}, whole UI run ${seconds(ui.timings.totalMs)}`);
+      if (ui.screenshots.length) console.log(`screenshots: ${ui.screenshots.join(', ')}${values['update-screenshots'] ? ' (copied to media/screenshots/ when all passed)' : ''}`);
+    } catch (error) {
+      report('ui', [{ name: 'start the editor for the UI test', ok: false, ms: 0, error: error.stack ?? String(error) }]);
+    }
   }
 }
 
