@@ -152,6 +152,15 @@ describe('LaTeX offsets', () => {
     }
   });
 
+  it('scans a paragraph too long for the grammar with the local scanner', () => {
+    const line = 'We get $a$ and \\(b\\) % not $c$\n';
+    const text = line.repeat(Math.ceil(120_000 / line.length));
+    const { result } = scanView(text, 'latex');
+    assert.equal(result.regions.length, 2 * Math.ceil(120_000 / line.length));
+    assert.deepEqual(result.problems, []);
+    assert.deepEqual(result.regions.slice(-2).map((r) => text.slice(r.start, r.end)), ['$a$', '\\(b\\)']);
+  });
+
   it('finds the same regions in a long note scanned in many chunks', () => {
     const paragraph = (i: number) =>
       `Paragraph ${i} has $a_{${i}}$ and \\(b\\) % not $this$\n\\begin{align*}\nA_{${i}} &= ${i} \\\\\n&= ${i}\n\\end{align*}\n` +
