@@ -17,6 +17,7 @@ import {
 } from './disk';
 import { type RadicalForm, quadraticRadical, radicalToLatex, radicalToString } from './radical';
 import { NumberField } from './numberfield';
+import { compareAbsWithOneOf, realPartSignOf } from './algebraic-sign';
 
 /** Certified root lists per minimal polynomial, shared so that root indices stay canonical. */
 const rootCache = new Map<string, ComplexRootEnclosure[]>();
@@ -312,55 +313,14 @@ export class AlgebraicNumber {
     return this.rational ? [] : rootsOfIrreducible(this.minimalPolynomial);
   }
 
-  /**
-   * Exact sign of the real part. Re α = 0 forces α = −ᾱ, hence f(−x) = ±f(x) for the minimal
-   * polynomial f; then −ᾱ is a root of f, and the mirrored disk of α either misses α's disk
-   * (Re α ≠ 0, its sign read off the disk) or meets no other root's disk (so −ᾱ = α).
-   */
+  /** Exact sign of the real part, boundary (Re α = 0) included; see ./algebraic-sign. */
   realPartSign(): -1 | 0 | 1 {
-    if (this.isReal()) return this.sign();
-    const f = this.minimalPolynomial;
-    const mirrored = f.compose(Poly.fromInts([0, -1]));
-    const symmetric = mirrored.equals(f) || mirrored.equals(f.neg());
-    const all = rootsOfIrreducible(f);
-    for (let digits = 4; digits < 5000; digits *= 2) {
-      const d = this.disk(digits);
-      if (d.re.abs().compare(d.radius) > 0) return d.re.sign();
-      if (symmetric) {
-        const m: Disk = { re: d.re.neg(), im: d.im, radius: d.radius };
-        const others = all.filter((r, i) => i !== this.rootIndex && disksIntersect(m, r.refineToRadius(digitsRadius(digits)).disk()));
-        if (others.length === 0 && disksIntersect(m, d)) return 0;
-      }
-    }
-    throw new BudgetError('the sign of the real part could not be decided');
+    return realPartSignOf(this);
   }
 
-  /**
-   * Exact comparison of |α| with 1. |α| = 1 forces 1/ᾱ = α, hence the minimal polynomial is
-   * self-reciprocal up to sign; then 1/ᾱ is a root and the inverted disk identifies it as above.
-   */
+  /** Exact comparison of |α| with 1, boundary (|α| = 1) included; see ./algebraic-sign. */
   compareAbsWithOne(): -1 | 0 | 1 {
-    if (this.rational) return this.rational.abs().compare(Rational.ONE);
-    const f = this.minimalPolynomial;
-    const reversed = Poly.fromRationals(f.coeffs.slice().reverse());
-    const reciprocal = reversed.equals(f) || reversed.equals(f.neg());
-    const all = rootsOfIrreducible(f);
-    for (let digits = 4; digits < 5000; digits *= 2) {
-      const d = this.disk(digits);
-      const c2 = d.re.mul(d.re).add(d.im.mul(d.im));
-      const inner = Rational.ONE.sub(d.radius);
-      if (inner.sign() > 0 && c2.compare(inner.mul(inner)) < 0) return -1;
-      const outer = Rational.ONE.add(d.radius);
-      if (c2.compare(outer.mul(outer)) > 0) return 1;
-      if (reciprocal) {
-        const m = diskInv(diskConj(d));
-        if (m) {
-          const others = all.filter((r, i) => i !== this.rootIndex && disksIntersect(m, r.refineToRadius(digitsRadius(digits)).disk()));
-          if (others.length === 0 && disksIntersect(m, d)) return 0;
-        }
-      }
-    }
-    throw new BudgetError('|α| against 1 could not be decided');
+    return compareAbsWithOneOf(this);
   }
 
   /** a + b√d for degree ≤ 2 (b = 0, d = 1 for rationals is not used: undefined for rationals). */
