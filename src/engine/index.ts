@@ -31,3 +31,4 @@ export * from './exponential-values';
 export * from './exppoly-matrix';
 export * from './powers';
 export * from './stability';
+export * from './multivariate-gcd';

@@ -9,11 +9,11 @@
  * is decided by cross-multiplication (a/b = c/d ⇔ ad = cb), which is exact whether or not the
  * fractions are in lowest terms.
  *
- * Simplification is partial but cheap: rational content, common monomial factors, exact division
- * of one side by the other, and a univariate gcd when both sides involve only one and the same
- * parameter. A full multivariate gcd is not implemented; values stay correct, only possibly
- * unreduced (the matrix routines below avoid creating such fractions: they are division-free
- * until one final division by the determinant).
+ * Simplification: rational content, common monomial factors, exact division of one side by the
+ * other, a univariate gcd (poly.ts) when only one parameter occurs, and otherwise a multivariate
+ * gcd (multivariate-gcd.ts) while the polynomials are small. Above that size fractions stay
+ * correct but possibly unreduced (the matrix routines below avoid creating such fractions: they
+ * are division-free until one final division by the determinant).
  */
 import { Budget, DomainError } from './errors';
 import type { Field } from './field';
@@ -21,8 +21,15 @@ import { Matrix } from './matrix';
 import type { ParameterDomainMarker } from './matrix-domains';
 import { charpolyBerkowitz } from './charpoly';
 import { MPoly, type Monomial } from './multivariate';
+import { polynomialGcd } from './multivariate-gcd';
 import { polyGcd } from './poly';
 import { Rational } from './rational';
+
+/**
+ * Above this product of term counts the multivariate gcd is skipped (its pseudo-remainders grow
+ * fast); such fractions stay correct, possibly unreduced.
+ */
+const MAX_GCD_TERM_PRODUCT = 400;
 
 function monomialGcd(a: Monomial, b: Monomial): Monomial {
   const out: [string, number][] = [];
@@ -84,16 +91,25 @@ export class RationalFunction {
         num = MPoly.fromUnivariate(nu.divExact(gu), vars[0]);
         den = MPoly.fromUnivariate(du.divExact(gu), vars[0]);
       }
+    } else if (!num.isConstant() && num.size() * den.size() <= MAX_GCD_TERM_PRODUCT) {
+      const g = polynomialGcd(num, den);
+      if (!g.isConstant()) {
+        num = num.divideExact(g)!;
+        den = den.divideExact(g)!;
+      }
     }
     return RationalFunction.normalised(num, den);
   }
 
-  /** Scales so the denominator's leading coefficient is 1 (a stable printed form). */
+  /**
+   * Scales so the denominator has coprime integer coefficients and a positive leading term (a
+   * stable printed form: (2k − 2m)/(2k + 3m) rather than (k − m)/(k + 3/2 m)).
+   */
   private static normalised(num: MPoly, den: MPoly): RationalFunction {
     if (den.isConstant()) return new RationalFunction(num.scale(den.constantTerm().inv()), MPoly.ONE);
-    const lc = den.leadingTerm()!.coefficient;
-    if (lc.isOne()) return new RationalFunction(num, den);
-    const s = lc.inv();
+    let s = den.content().inv();
+    if (den.leadingTerm()!.coefficient.sign() < 0) s = s.neg();
+    if (s.isOne()) return new RationalFunction(num, den);
     return new RationalFunction(num.scale(s), den.scale(s));
   }
 

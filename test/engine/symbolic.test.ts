@@ -6,6 +6,7 @@ import { Matrix, unify } from '../../src/engine/matrix';
 import { ZZ } from '../../src/engine/matrix-domains';
 import { determinant } from '../../src/engine/charpoly';
 import { MPoly } from '../../src/engine/multivariate';
+import { polynomialGcd } from '../../src/engine/multivariate-gcd';
 import {
   QParams,
   RationalFunction as RF,
@@ -115,4 +116,61 @@ test('SymPy agrees on det, charpoly and inverse of parameter matrices', () => {
     assert.ok(r.charpoly, `charpoly of case ${i}`);
     assert.ok(r.inverse, `inverse of case ${i}`);
   });
+});
+
+test('multivariate gcd reduces fractions to lowest terms (common practice, no source)', () => {
+  const k = MPoly.variable('k');
+  const m = MPoly.variable('m');
+  const one = MPoly.ONE;
+  // k (m + 1) / ((k² − 1)(m + 1)) = k / (k² − 1)
+  const r = RF.of(k.mul(m.add(one)), k.mul(k).sub(one).mul(m.add(one)));
+  assert.ok(r.num.equals(k) && r.den.equals(k.mul(k).sub(one)), r.toString());
+  // 2(k + m)(k − m) / ((k + m)(2k + 3m)) = (2k − 2m)/(2k + 3m)
+  const two = Rational.of(2);
+  const s = RF.of(k.add(m).mul(k.sub(m)).scale(two), k.add(m).mul(k.scale(two).add(m.scale(Rational.of(3)))));
+  assert.equal(s.toString(), '(2*k - 2*m)/(2*k + 3*m)');
+  assert.equal(polynomialGcd(k.mul(k).mul(m).sub(m), k.mul(m).add(m)).toString(), 'k*m + m');
+  assert.ok(polynomialGcd(k.add(one), m.add(one)).equals(one));
+  // the inverse of diag([[k, 1], [1, k]], m + 1) has reduced entries
+  const kk = RF.variable('k');
+  const a = parameterMatrix([[kk, 1, 0], [1, kk, 0], [0, 0, RF.variable('m').add(RF.ONE)]]);
+  const inv = parameterInverse(a);
+  assert.equal(inv.get(0, 0).toString(), 'k/(k^2 - 1)');
+  assert.equal(inv.get(2, 2).toString(), '1/(m + 1)');
+});
+
+test('rational-function arithmetic with gcd reduction keeps values: seeded ops checked at rational points', () => {
+  // The reduced result must take the same value as the operands' values combined (common practice).
+  let seed = 2024;
+  const rand = (k: number) => {
+    seed = (seed * 1103515245 + 12345) % 2147483648;
+    return seed % k;
+  };
+  const names = ['a', 'b', 'c'];
+  const randomPoly = () => {
+    let p = MPoly.constant(rand(5) - 2);
+    for (let t = 0; t < 3; t++) {
+      let term = MPoly.constant(rand(7) - 3);
+      for (const v of names) if (rand(2)) term = term.mul(MPoly.variable(v).pow(1 + rand(2)));
+      p = p.add(term);
+    }
+    return p;
+  };
+  const point = new Map(names.map((v, i) => [v, Rational.of(3 + 2 * i, 7 - i)]));
+  for (let trial = 0; trial < 60; trial++) {
+    const common = randomPoly();
+    const nx = randomPoly().mul(common);
+    const dx = randomPoly().mul(common);
+    if (dx.isZero() || dx.evaluate(point).isZero()) continue;
+    const x = RF.of(nx, dx);
+    assert.ok(x.evaluate(point).equals(nx.evaluate(point).div(dx.evaluate(point))), `trial ${trial}: ${x.toString()}`);
+    const y = RF.of(randomPoly(), MPoly.ONE.add(MPoly.variable('a').pow(2)));
+    const ops: [RF, Rational][] = [
+      [x.add(y), x.evaluate(point).add(y.evaluate(point))],
+      [x.mul(y), x.evaluate(point).mul(y.evaluate(point))],
+      [x.sub(y), x.evaluate(point).sub(y.evaluate(point))],
+    ];
+    if (!y.isZero() && !y.evaluate(point).isZero()) ops.push([x.div(y), x.evaluate(point).div(y.evaluate(point))]);
+    for (const [r, v] of ops) assert.ok(r.evaluate(point).equals(v), `trial ${trial}`);
+  }
 });

@@ -65,7 +65,8 @@ print(json.dumps(out))
 
 /**
  * For each parameter matrix (entries as SymPy-readable strings) and our claimed det, charpoly
- * coefficients (x^0 up) and inverse entries: whether each difference simplifies to zero.
+ * coefficients (x^0 up) and inverse entries (checked as A·B = I): whether each difference is zero (sp.cancel brings a
+ * rational function to lowest terms, so this is an exact test).
  */
 export const SYMBOLIC_SCRIPT = String.raw`
 import sys, json
@@ -78,13 +79,16 @@ for c in json.load(sys.stdin):
     P = lambda s: parse_expr(s, local_dict=names)
     A = sp.Matrix([[P(e) for e in row] for row in c['matrix']])
     n = A.rows
-    det_ok = sp.simplify(A.det() - P(c['det'])) == 0
-    cp = sp.Poly(A.charpoly(x).as_expr(), x).all_coeffs()[::-1]
-    cp_ok = len(cp) == len(c['charpoly']) and all(sp.simplify(a - P(b)) == 0 for a, b in zip(cp, c['charpoly']))
+    det_ok = sp.cancel(A.det(method='bareiss') - P(c['det'])) == 0
+    # fraction-free elimination on xI − A: a different method from our Berkowitz
+    cp = sp.Poly(sp.cancel((x * sp.eye(n) - A).det(method='bareiss')), x).all_coeffs()[::-1]
+    cp_ok = len(cp) == len(c['charpoly']) and all(sp.cancel(a - P(b)) == 0 for a, b in zip(cp, c['charpoly']))
     inv_ok = None
     if c.get('inverse') is not None:
-        Ai = A.inv()
-        inv_ok = all(sp.simplify(Ai[i, j] - P(c['inverse'][i][j])) == 0 for i in range(n) for j in range(n))
+        # A·B = I certifies B = A⁻¹ and is much faster in SymPy than inverting symbolically
+        B = sp.Matrix([[P(e) for e in row] for row in c['inverse']])
+        AB = A * B
+        inv_ok = all(sp.cancel(AB[i, j] - (1 if i == j else 0)) == 0 for i in range(n) for j in range(n))
     out.append({'det': det_ok, 'charpoly': cp_ok, 'inverse': inv_ok, 'sympyDet': str(sp.factor(A.det()))})
 print(json.dumps(out))
 `;
