@@ -128,7 +128,8 @@ export class AlgebraicNumber {
   static rootsOf(p: Poly): { value: AlgebraicNumber; multiplicity: number }[] {
     const out: { value: AlgebraicNumber; multiplicity: number }[] = [];
     for (const { factor, multiplicity } of factorOverQ(p).factors) {
-      for (const value of AlgebraicNumber.allRootsOfIrreducible(factor)) out.push({ value, multiplicity });
+      // Factors from factorOverQ are monic irreducible: no second irreducibility test.
+      for (const value of AlgebraicNumber.allRootsOfIrreducibleTrusted(factor)) out.push({ value, multiplicity });
     }
     return out;
   }
