@@ -1,0 +1,223 @@
+/**
+ * Protocol tests against the bundled language server over stdio, with a real LSP client
+ * connection: diagnostics (severity, exact range, code, source, related information, the
+ * replacement in `data`), hover, quick fixes and fix-all, code lenses and a pushed settings
+ * change. One server process serves the whole file.
+ *
+ * Values are 2×2 determinants and traces worked by hand (det = ad − bc, trace = a + d): common
+ * practice, no source.
+ */
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { DiagnosticSeverity, type CodeAction, type Diagnostic, type TextEdit } from 'vscode-languageserver-protocol/node';
+import { applyTextEdits, positionOf, ServerSession } from './session';
+
+// A = [[0, 1], [−6, −5]]: det 6, trace −5. B = [[2, 1], [0, 2]]: det 4, trace 4. Z is undefined.
+const MARKDOWN = `# Winch drum brake — state model
+
+$$A = \\begin{pmatrix} 0 & 1 \\\\ -6 & -5 \\end{pmatrix}$$
+
+We use $\\det A = 5$ and $\\operatorname{tr} A = -5$, and $\\det Z = 2$.
+
+$$\\det A = 6$$
+
+\`\`\`notary
+B = [[2, 1], [0, 2]]
+\\det B = 4
+\\operatorname{tr} B = 5
+\`\`\`
+`;
+
+// P = [[1, 2], [3, 4]]: det −2, trace 5.
+const LATEX = `\\documentclass{article}
+\\begin{document}
+\\[ P = \\begin{bmatrix} 1 & 2 \\\\ 3 & 4 \\end{bmatrix} \\]
+Then $\\det P = 2$.
+\\begin{align}
+  \\operatorname{tr} P &= 5
+\\end{align}
+\\end{document}
+`;
+
+const MD_URI = 'file:///notes/winch-brake.md';
+const TEX_URI = 'file:///notes/twin-fans.tex';
+
+/** A diagnostic's message as text (LSP 3.18 also allows Markdown content). */
+function textOf(diagnostic: Diagnostic): string {
+  return typeof diagnostic.message === 'string' ? diagnostic.message : diagnostic.message.value;
+}
+
+/** The LSP range of `needle` (its `occurrence`-th appearance) in `text`. */
+function rangeOf(text: string, needle: string, occurrence = 0) {
+  let at = -1;
+  for (let k = 0; k <= occurrence; k++) at = text.indexOf(needle, at + 1);
+  assert.ok(at >= 0, `${needle} is in the note`);
+  return { start: positionOf(text, at), end: positionOf(text, at + needle.length) };
+}
+
+/** The range of the claimed value `value` at the end of the statement `statement`. */
+function valueRange(text: string, statement: string, value: string) {
+  const at = text.indexOf(statement);
+  const valueAt = at + statement.lastIndexOf(value);
+  return { start: positionOf(text, valueAt), end: positionOf(text, valueAt + value.length) };
+}
+
+describe('language server over stdio (settings pushed by the client)', () => {
+  let session: ServerSession;
+  let mdDiagnostics: Diagnostic[];
+
+  before(async () => {
+    session = await ServerSession.start({ pullConfiguration: false });
+    await session.open(MD_URI, 'markdown', MARKDOWN);
+    await session.open(TEX_URI, 'latex', LATEX);
+    mdDiagnostics = await session.diagnosticsFor(MD_URI, 1);
+  });
+  after(async () => {
+    const code = await session.stop();
+    assert.equal(code, 0, `the server exits cleanly after shutdown/exit: ${session.stderr.join('')}`);
+  });
+
+  it('announces incremental sync, hover, code actions (quick fix and fix-all) and code lenses', () => {
+    const caps = session.initializeResult.capabilities;
+    assert.equal(typeof caps.textDocumentSync === 'object' ? caps.textDocumentSync.change : caps.textDocumentSync, 2);
+    assert.ok(caps.hoverProvider);
+    assert.ok(caps.codeLensProvider);
+    const kinds = typeof caps.codeActionProvider === 'object' ? caps.codeActionProvider.codeActionKinds : [];
+    assert.deepEqual([...(kinds ?? [])].sort(), ['quickfix', 'source.fixAll.matrixNotary']);
+  });
+
+  it('publishes an Error for each failing claim of a Markdown note with range, code, source, related information and replacement', () => {
+    const errors = mdDiagnostics.filter((d) => d.severity === DiagnosticSeverity.Error);
+    assert.equal(errors.length, 2, JSON.stringify(mdDiagnostics, null, 1));
+    const [detA, trB] = errors.sort((a, b) => a.range.start.line - b.range.start.line);
+    assert.deepEqual(detA.range, rangeOf(MARKDOWN, '\\det A = 5'));
+    assert.equal(detA.code, 'det.mismatch');
+    assert.equal(detA.source, 'Matrix Notary');
+    assert.match(textOf(detA), /\b6\b/);
+    assert.deepEqual(
+      detA.relatedInformation?.map((r) => [r.location.uri, r.location.range.start.line]),
+      [[MD_URI, 2]],
+      'related information points at the definition of A (line 3 of the note)',
+    );
+    assert.deepEqual((detA.data as { replacement: TextEdit }).replacement, { range: valueRange(MARKDOWN, '\\det A = 5', '5'), newText: '6' });
+
+    assert.deepEqual(trB.range, rangeOf(MARKDOWN, '\\operatorname{tr} B = 5'));
+    assert.match(String(trB.code), /^[a-z]+(\.[a-z-]+)+$/, 'a stable dotted code');
+    assert.deepEqual(trB.relatedInformation?.map((r) => r.location.range.start.line), [9], 'points at B = [[2, 1], [0, 2]]');
+    assert.deepEqual((trB.data as { replacement: TextEdit }).replacement, { range: valueRange(MARKDOWN, '\\operatorname{tr} B = 5', '5'), newText: '4' });
+  });
+
+  it('publishes an undecidable claim as a Warning with its reason, and nothing for claims that hold', () => {
+    const others = mdDiagnostics.filter((d) => d.severity !== DiagnosticSeverity.Error);
+    assert.equal(others.length, 1, JSON.stringify(others));
+    assert.equal(others[0].severity, DiagnosticSeverity.Warning);
+    assert.deepEqual(others[0].range, rangeOf(MARKDOWN, '\\det Z = 2'));
+    assert.equal(others[0].code, 'unchecked.undefined-name');
+    assert.match(textOf(others[0]), /Z/);
+  });
+
+  it('publishes the failing claim of a LaTeX note with its exact range and replacement', async () => {
+    const diagnostics = await session.diagnosticsFor(TEX_URI, 1);
+    assert.equal(diagnostics.length, 1, JSON.stringify(diagnostics));
+    const [detP] = diagnostics;
+    assert.equal(detP.severity, DiagnosticSeverity.Error);
+    assert.equal(detP.code, 'det.mismatch');
+    assert.deepEqual(detP.range, rangeOf(LATEX, '\\det P = 2'));
+    assert.deepEqual((detP.data as { replacement: TextEdit }).replacement, { range: valueRange(LATEX, '\\det P = 2', '2'), newText: '-2' });
+    assert.deepEqual(detP.relatedInformation?.map((r) => r.location.range.start.line), [2]);
+  });
+
+  it('answers a hover on a matrix name with Markdown holding its determinant and trace', async () => {
+    const at = positionOf(MARKDOWN, MARKDOWN.indexOf('\\det A = 5') + '\\det '.length);
+    const hover = await session.hover(MD_URI, at.line, at.character);
+    assert.ok(hover, 'a hover over A');
+    const contents = hover.contents as { kind: string; value: string };
+    assert.equal(contents.kind, 'markdown');
+    assert.match(contents.value, /det 6\b/);
+    assert.match(contents.value, /trace -5\b/);
+    assert.ok(hover.range, 'the hover names the range of A');
+    assert.deepEqual(hover.range, { start: at, end: { line: at.line, character: at.character + 1 } });
+  });
+
+  it('answers no hover over plain prose', async () => {
+    const at = positionOf(MARKDOWN, MARKDOWN.indexOf('Winch'));
+    assert.equal(await session.hover(MD_URI, at.line, at.character), null);
+  });
+
+  it('offers a quick fix whose edit is exactly the replacement, and fix-all actions', async () => {
+    const detA = mdDiagnostics.find((d) => d.code === 'det.mismatch')!;
+    const actions = (await session.codeActions(MD_URI, [detA])) as CodeAction[];
+    const quick = actions.filter((a) => a.kind === 'quickfix' && a.isPreferred);
+    assert.equal(quick.length, 1);
+    const replacement = (detA.data as { replacement: TextEdit }).replacement;
+    assert.deepEqual(quick[0].edit?.changes?.[MD_URI], [replacement]);
+    assert.equal(
+      applyTextEdits(MARKDOWN, [replacement]),
+      MARKDOWN.replace('$\\det A = 5$', '$\\det A = 6$'),
+      'the fix touches only the claimed value',
+    );
+    const fixAll = actions.find((a) => a.kind === 'source.fixAll.matrixNotary');
+    assert.ok(fixAll, 'source.fixAll.matrixNotary is offered');
+    assert.equal(fixAll.edit?.changes?.[MD_URI]?.length, 2);
+  });
+
+  it('offers only the fix-all source action when asked for source.fixAll', async () => {
+    const actions = (await session.codeActions(MD_URI, [], ['source.fixAll'])) as CodeAction[];
+    assert.deepEqual(
+      actions.map((a) => a.kind),
+      ['source.fixAll.matrixNotary'],
+    );
+  });
+
+  it('shows a code lens with a verdict summary above the display equation and the notary block', async () => {
+    const lenses = (await session.codeLenses(MD_URI)) ?? [];
+    const byLine = new Map(lenses.map((l) => [l.range.start.line, l.command?.title ?? '']));
+    const displayLine = positionOf(MARKDOWN, MARKDOWN.indexOf('$$\\det A = 6$$')).line;
+    const blockLine = positionOf(MARKDOWN, MARKDOWN.indexOf('```notary')).line;
+    assert.match(byLine.get(displayLine) ?? '', /Matrix Notary: ✓ 1 holds?\b.*✗ 0 fail/, JSON.stringify(lenses));
+    const block = [...byLine.entries()].find(([line]) => line >= blockLine && line <= blockLine + 1);
+    assert.ok(block, `a lens at the notary block: ${JSON.stringify(lenses)}`);
+    assert.match(block[1], /✓ 1 holds?\b.*✗ 1 fails?\b/);
+  });
+
+  it('after applying fix-all and re-sending the text, publishes no Error for the new version', async () => {
+    const actions = (await session.codeActions(MD_URI, [], ['source.fixAll'])) as CodeAction[];
+    const edits = actions[0].edit!.changes![MD_URI];
+    const fixed = applyTextEdits(MARKDOWN, edits);
+    assert.equal(fixed, MARKDOWN.replace('$\\det A = 5$', '$\\det A = 6$').replace('\\operatorname{tr} B = 5', '\\operatorname{tr} B = 4'));
+    const version = await session.replaceText(MD_URI, fixed);
+    const diagnostics = await session.diagnosticsFor(MD_URI, version);
+    assert.deepEqual(
+      diagnostics.filter((d) => d.severity === DiagnosticSeverity.Error),
+      [],
+    );
+    assert.equal(diagnostics.length, 1, 'the undecidable claim is still reported');
+  });
+
+  it('applies incremental edits: fixing the LaTeX note with its quick fix clears its Error', async () => {
+    const [detP] = await session.diagnosticsFor(TEX_URI, 1);
+    const version = await session.applyEdits(TEX_URI, [(detP.data as { replacement: TextEdit }).replacement]);
+    assert.deepEqual(await session.diagnosticsFor(TEX_URI, version), []);
+  });
+
+  it('reloads pushed settings live: unchecked claims become Information, then Warning again', async () => {
+    const version = 2; // the Markdown note after fix-all
+    await session.changeSettings({ uncheckedSeverity: 'information' });
+    const info = await session.diagnosticsFor(MD_URI, version, 30_000, (d) => d.length === 1 && d[0].severity === DiagnosticSeverity.Information);
+    assert.equal(info[0].code, 'unchecked.undefined-name');
+    await session.changeSettings({ uncheckedSeverity: 'warning' });
+    await session.diagnosticsFor(MD_URI, version, 30_000, (d) => d.length === 1 && d[0].severity === DiagnosticSeverity.Warning);
+  });
+
+  it('clears the diagnostics of a closed document', async () => {
+    await session.close(TEX_URI);
+    // The clearing notification carries no version: a later round trip on another document
+    // (answered in order) shows it has arrived.
+    const probe = 'file:///notes/probe.md';
+    await session.open(probe, 'markdown', '$$C = \\begin{pmatrix} 1 \\end{pmatrix}$$ and $\\det C = 1$\n');
+    await session.diagnosticsFor(probe, 1);
+    const last = session.publishedFor(TEX_URI).at(-1);
+    assert.deepEqual(last?.diagnostics, []);
+    assert.equal(last?.version, undefined, 'the last notification is the clearing one (versioned ones came before)');
+  });
+});
