@@ -61,6 +61,26 @@ function markdownEvents(text: string): Event[] {
 
 /** Finds every math region of SPEC §2 in a Markdown document. */
 export function scanMarkdown(text: string): ScanResult {
+  // micromark drops a leading byte-order mark and counts offsets without it; we scan the text
+  // after the mark and move every offset back by one, so offsets index `text` itself.
+  if (text.charCodeAt(0) !== 0xfeff) return scanWithoutByteOrderMark(text);
+  const result = scanWithoutByteOrderMark(text.slice(1));
+  const move = (r: TextRange): TextRange => ({ start: r.start + 1, end: r.end + 1 });
+  return {
+    regions: result.regions.map((region) => ({
+      ...region,
+      start: region.start + 1,
+      end: region.end + 1,
+      contentStart: region.contentStart + 1,
+      contentEnd: region.contentEnd + 1,
+      skips: region.skips.map(move),
+      ...(region.lines ? { lines: region.lines.map(move) } : {}),
+    })),
+    problems: result.problems.map((problem) => ({ ...problem, start: problem.start + 1, end: problem.end + 1 })),
+  };
+}
+
+function scanWithoutByteOrderMark(text: string): ScanResult {
   const regions: MathRegion[] = [];
   const problems: Problem[] = [];
   let open: OpenConstruct | undefined;

@@ -126,6 +126,16 @@ describe('LaTeX offsets', () => {
     );
   });
 
+  it('counts a leading byte-order mark in the offsets', () => {
+    const text = '\uFEFF$x$ and \\[y\\]';
+    const { view, result } = scanView(text, 'latex');
+    assert.deepEqual(view, [
+      ['inline', '$', 'x'],
+      ['display', '\\[', 'y'],
+    ]);
+    assert.equal(result.regions[0].start, 1);
+  });
+
   it('blanks % comments inside a region so offsets still line up', () => {
     const text = '\\begin{align}\na &= b % why\n% \\end{align}\nc &= d\n\\end{align}';
     const region = scanDocument(text, 'latex').regions[0];

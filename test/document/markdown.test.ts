@@ -95,6 +95,17 @@ describe('Markdown offsets', () => {
     );
   });
 
+  it('counts a leading byte-order mark in the offsets', () => {
+    const text = '\uFEFF---\ntitle: $a$\n---\n$b$ and\n\n```notary\nc\n```\n';
+    const { view, result } = scanView(text, 'markdown');
+    assert.deepEqual(view, [
+      ['inline', '$', 'b'],
+      ['notary', 'fence-notary', 'c'],
+    ]);
+    assert.equal(result.regions[0].start, text.indexOf('$b'));
+    assert.deepEqual(result.regions[1].lines, [{ start: text.indexOf('c\n```'), end: text.indexOf('c\n```') + 1 }]);
+  });
+
   it('gives each notary line its own range, empty lines left out', () => {
     const text = '```notary\r\nA = [[4, 1], [0, 4]]\r\n\r\n\\det A = 16\r\n```';
     const region = scanDocument(text, 'markdown').regions[0];

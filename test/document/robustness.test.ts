@@ -64,7 +64,8 @@ describe('scanning mutated notes', () => {
     it(`never throws and keeps every range inside the text (${name}, 200 mutants)`, () => {
       const next = random(name.length * 7919);
       for (let i = 0; i < 200; i++) {
-        const text = mutate(base, next);
+        // Every fifth mutant starts with a byte-order mark, which parsers like to drop silently.
+        const text = (i % 5 === 0 ? '\uFEFF' : '') + mutate(base, next);
         for (const language of ['markdown', 'latex'] as const) {
           try {
             assertWellFormed(text, scanDocument(text, language));
