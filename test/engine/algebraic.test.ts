@@ -5,6 +5,7 @@ import { AlgebraicNumber } from '../../src/engine/algebraic';
 import { Poly } from '../../src/engine/poly';
 import { Rational } from '../../src/engine/rational';
 import { NumberField } from '../../src/engine/numberfield';
+import { spawnSync } from 'node:child_process';
 
 const P = (...c: number[]) => Poly.fromInts(c);
 const q = (n: number, d = 1) => Rational.of(n, d);
@@ -167,4 +168,38 @@ test('the same-field shortcut agrees with arithmetic in the number field Q(√5)
   assert.equal(x.mul(y).toLatex(), '7 + \\sqrt{5}');
   assert.ok(x.add(y).equals(A.fromFieldElement(K, K.add(K.element(P(3, 2)), K.element(P(-1, 1))), 1)));
   assert.ok(x.div(y).mul(y).equals(x));
+});
+
+const sympyMissing = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
+  ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)'
+  : false;
+
+test('minimal polynomials of sums, products and quotients agree with SymPy', { skip: sympyMissing }, () => {
+  // Oracle: SymPy (Debian python3-sympy) minimal_polynomial on the same radical expressions.
+  const cases: [string, () => AlgebraicNumber][] = [
+    ['sqrt(2) + root(3, 3)', () => A.sqrt(q(2)).add(A.nthRoot(q(3), 3))],
+    ['sqrt(5) * root(2, 3)', () => A.sqrt(q(5)).mul(A.nthRoot(q(2), 3))],
+    ['(1 + sqrt(-3)) / (2 - sqrt(7))', () => A.fromInt(1).add(A.sqrt(q(-3))).div(A.fromInt(2).sub(A.sqrt(q(7))))],
+    ['sqrt(6) - sqrt(2)*sqrt(3)', () => A.sqrt(q(6)).sub(A.sqrt(q(2)).mul(A.sqrt(q(3))))],
+    ['I + root(2, 4)', () => A.i().add(A.nthRoot(q(2), 4))],
+    ['(sqrt(3)/2 + I/2)**5', () => A.sqrt(q(3)).scale(q(1, 2)).add(A.i().scale(q(1, 2))).pow(5)],
+  ];
+  const script = [
+    'import sys, json',
+    'from sympy import sympify, minimal_polynomial, symbols, Poly, QQ',
+    'x = symbols("x")',
+    'out = []',
+    'for line in sys.stdin:',
+    '    e = sympify(json.loads(line))',
+    '    m = Poly(minimal_polynomial(e, x), x, domain=QQ).monic()',
+    '    out.append([str(c) for c in reversed(m.all_coeffs())])',
+    'print(json.dumps(out))',
+  ].join('\n');
+  const run = spawnSync('python3', ['-c', script], { input: cases.map(([e]) => JSON.stringify(e)).join('\n'), encoding: 'utf8' });
+  assert.equal(run.status, 0, run.stderr);
+  const expected = JSON.parse(run.stdout) as string[][];
+  cases.forEach(([text, build], k) => {
+    const want = Poly.fromRationals(expected[k].map((c) => Rational.parse(c)!));
+    assert.equal(build().minimalPolynomial.toString(), want.toString(), text);
+  });
 });
