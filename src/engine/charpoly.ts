@@ -22,7 +22,7 @@
 import { Budget } from './errors';
 import type { Ring } from './field';
 import { Matrix } from './matrix';
-import { clearDenominators, domainLevel } from './matrix-domains';
+import { clearDenominators, integerOrRationalLevel } from './matrix-domains';
 import { determinantBareiss } from './matrix-elimination';
 import {
   charpolyHessenbergModP,
@@ -134,7 +134,7 @@ function scaledToIntegers(m: Matrix<Rational>): { scale: bigint; entries: bigint
  */
 export function charpolyCoefficients<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): T[] {
   const n = m.requireSquare();
-  const level = domainLevel(m.domain);
+  const level = integerOrRationalLevel(m.domain);
   if (level === 0) return charpolyIntegerModular(m.entries as readonly bigint[], n, budget) as T[];
   if (level === 1) {
     const { scale, entries } = scaledToIntegers(m as Matrix<Rational>);
@@ -148,7 +148,7 @@ export function charpolyCoefficients<T>(m: Matrix<T>, budget: Budget = Budget.un
 /** The characteristic polynomial det(xI − A) of a Z or Q matrix as a monic {@link Poly}. */
 export function characteristicPolynomial(m: Matrix<bigint> | Matrix<Rational>, budget: Budget = Budget.unlimited()): Poly {
   const coeffs = charpolyCoefficients(m as Matrix<unknown>, budget);
-  return domainLevel(m.domain) === 0 ? Poly.fromInts(coeffs as bigint[]) : Poly.fromRationals(coeffs as Rational[]);
+  return integerOrRationalLevel(m.domain) === 0 ? Poly.fromInts(coeffs as bigint[]) : Poly.fromRationals(coeffs as Rational[]);
 }
 
 /** Below this size Z and Q determinants use Bareiss, from it on the multi-modular route. */
@@ -164,8 +164,8 @@ export const MODULAR_DETERMINANT_FROM_SIZE = 11;
  */
 export function determinant<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): T {
   const n = m.requireSquare();
-  const level = domainLevel(m.domain);
-  if (level <= 1 && n < MODULAR_DETERMINANT_FROM_SIZE) return determinantBareiss(m, budget);
+  const level = integerOrRationalLevel(m.domain);
+  if (level !== undefined && n < MODULAR_DETERMINANT_FROM_SIZE) return determinantBareiss(m, budget);
   if (level === 0) return determinantIntegerModular(m.entries as readonly bigint[], n, budget) as T;
   if (level === 1) {
     const { scale, entries } = scaledToIntegers(m as Matrix<Rational>);

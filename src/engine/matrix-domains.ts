@@ -60,6 +60,17 @@ export function domainLevel(domain: Ring<unknown>): DomainLevel {
   throw new DomainError(`the domain ${domain.name} is not in the supported tower Z < Q < Q(α) < Q(params)`);
 }
 
+/**
+ * 0 for Z, 1 for Q, undefined for every other ring. The elimination and characteristic-polynomial
+ * dispatchers use it so that any ring outside the tower (say a polynomial ring with exact
+ * division) still reaches the generic kernels.
+ */
+export function integerOrRationalLevel(domain: Ring<unknown>): 0 | 1 | undefined {
+  if (domain === (ZZ as Ring<unknown>)) return 0;
+  if (domain === (QQ as Ring<unknown>)) return 1;
+  return undefined;
+}
+
 interface HasModulus {
   readonly modulus?: { equals(other: unknown): boolean };
 }

@@ -15,7 +15,7 @@
 import { Budget, ShapeError, SingularError } from './errors';
 import type { ExactDivisionRing, Field } from './field';
 import { Matrix } from './matrix';
-import { ZZ, clearDenominators, domainLevel, hasExactDivision, isField } from './matrix-domains';
+import { ZZ, clearDenominators, hasExactDivision, integerOrRationalLevel, isField } from './matrix-domains';
 import { QQ, Rational } from './rational';
 
 /** The element type elimination results live in: integers are promoted to rationals. */
@@ -70,7 +70,7 @@ function bareissEchelon<T>(d: ExactDivisionRing<T>, w: Work<T>, budget: Budget):
 
 /** An integer working copy of a Z or Q matrix, each row scaled by the lcm of its denominators. */
 function integerRows(m: Matrix<unknown>): { work: Work<bigint>; rowScales: bigint[] } {
-  if (domainLevel(m.domain) === 0) {
+  if (integerOrRationalLevel(m.domain) === 0) {
     return { work: { a: (m.entries as bigint[]).slice(), rows: m.rows, cols: m.cols }, rowScales: new Array(m.rows).fill(1n) };
   }
   const a: bigint[] = [];
@@ -123,7 +123,7 @@ function gaussJordan<T>(f: Field<T>, w: Work<T>, budget: Budget, stopAtCols = w.
 
 /** The field a matrix's elimination runs in: Z is promoted to Q. */
 function asFieldMatrix(m: Matrix<unknown>): Matrix<unknown> {
-  return domainLevel(m.domain) === 0 ? m.convertTo(QQ) : m;
+  return integerOrRationalLevel(m.domain) === 0 ? m.convertTo(QQ) : m;
 }
 
 function requireField<T>(m: Matrix<T>, what: string): Field<T> {
@@ -139,8 +139,8 @@ function requireField<T>(m: Matrix<T>, what: string): Field<T> {
 export function determinantBareiss<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): T {
   const n = m.requireSquare();
   if (n === 0) return m.domain.one;
-  const level = domainLevel(m.domain);
-  if (level <= 1) {
+  const level = integerOrRationalLevel(m.domain);
+  if (level !== undefined) {
     const { work, rowScales } = integerRows(m);
     const { rank, swaps } = bareissEchelon(ZZ, work, budget);
     let det = rank < n ? 0n : work.a[n * n - 1];
@@ -165,7 +165,7 @@ export function determinantBareiss<T>(m: Matrix<T>, budget: Budget = Budget.unli
 /** The rank (fraction-free over Z and Q, Gauss–Jordan over other fields). */
 export function rank(m: Matrix<unknown>, budget: Budget = Budget.unlimited()): number {
   if (m.rows === 0 || m.cols === 0) return 0;
-  if (domainLevel(m.domain) <= 1) return bareissEchelon(ZZ, integerRows(m).work, budget).rank;
+  if (integerOrRationalLevel(m.domain) !== undefined) return bareissEchelon(ZZ, integerRows(m).work, budget).rank;
   if (hasExactDivision(m.domain)) return bareissEchelon(m.domain, { a: m.entries.slice(), rows: m.rows, cols: m.cols }, budget).rank;
   const f = requireField(m, 'the rank');
   return gaussJordan(f, { a: m.entries.slice(), rows: m.rows, cols: m.cols }, budget).pivots.length;
@@ -257,7 +257,7 @@ function inverseFractionFree(m: Matrix<unknown>, budget: Budget): Matrix<Rationa
  */
 export function inverse<T>(m: Matrix<T>, budget: Budget = Budget.unlimited()): Matrix<FieldElementOf<T>> {
   const n = m.requireSquare();
-  if (domainLevel(m.domain) <= 1) return inverseFractionFree(m, budget) as Matrix<FieldElementOf<T>>;
+  if (integerOrRationalLevel(m.domain) !== undefined) return inverseFractionFree(m, budget) as Matrix<FieldElementOf<T>>;
   const fm = asFieldMatrix(m) as Matrix<FieldElementOf<T>>;
   const f = requireField(fm, 'the inverse');
   const cols = 2 * n;
