@@ -1,128 +1,142 @@
 /**
- * The decomposition of one matrix, for hovers, the side panel and `matrix-notary decompose`: size,
- * det, trace, rank, characteristic and minimal polynomials, eigenvalues with both multiplicities
- * and Jordan block sizes.
+ * The decomposition of one matrix rendered for hovers (Markdown with matrices laid out in Unicode
+ * in code blocks, readable as plain text), for the side panel (titled LaTeX sections) and for
+ * `matrix-notary decompose` (text, LaTeX, JSON).
  */
-import { Budget, EngineError, factorOverQ, Matrix, Poly, rank as rankOf, Rational, spectrum, type Spectrum } from '../engine/index';
-import { parseMatrixSource, walkStatementsTo } from './locate';
-import { unicodeMatrix } from './layout';
+import { Budget, EngineError, factorOverQ, Matrix, Poly, type Rational } from '../engine/index';
 import type { DecomposeResult, MatrixDescription } from './api';
+import { matrixFacts, type EigenGroup, type MatrixFacts } from './facts';
+import { unicodeMatrix } from './layout';
+import { parseMatrixSource, walkStatementsTo } from './locate';
+import { numLatex } from './number';
+import { fromRationalMatrix } from './operations';
+import { matrixLatex } from './print';
+import { formatScalar } from './print-scalar';
+import type { Scalar } from './scalar';
 import type { CheckerConfig, DocumentLanguage } from './types';
 import { SAFETY_CAUTION } from './types';
 
-/** One eigenvalue group as the user reads it. */
-interface EigenGroup {
-  readonly latex: string;
-  readonly text: string;
-  readonly degree: number;
-  readonly algebraic: number;
-  readonly geometric: number;
-  readonly blocks: readonly number[];
+const TEXT_STYLE = { fraction: 'slash' as const };
+const LATEX_STYLE = { environment: 'pmatrix' as const, fraction: 'frac' as const };
+
+function unicode(m: Matrix<Scalar>): string {
+  return unicodeMatrix(m.toRows().map((r) => r.map((x) => formatScalar(x, 'text', TEXT_STYLE))));
 }
 
-/** The facts about one matrix, computed once and rendered several ways. */
-export interface MatrixFacts {
-  readonly matrix: Matrix<Rational>;
-  readonly rank: number;
-  readonly spectrum?: Spectrum;
-  readonly eigen?: readonly EigenGroup[];
-  /** Why the spectral part is missing (not square, over budget). */
-  readonly spectralNote?: string;
+function block(label: string, m: Matrix<Scalar>): string {
+  const lines = unicode(m).split('\n');
+  const pad = ' '.repeat(label.length);
+  const mid = Math.floor((lines.length - 1) / 2);
+  return lines.map((l, i) => (i === mid ? label : pad) + l).join('\n');
 }
 
-function rootsOfFactor(f: Poly): { latex: string; text: string } {
-  if (f.degree() === 1) {
-    const r = f.coeff(0).neg().div(f.coeff(1));
-    return { latex: r.toLatex(), text: r.toString() };
-  }
-  return { latex: `\\text{roots of } ${f.toLatex('x')}`, text: `roots of ${f.toString('x')}` };
-}
-
-/** Computes the facts of a rational matrix within the budget. */
-export function matrixFacts(m: Matrix<Rational>, config: CheckerConfig, budget: Budget): MatrixFacts {
-  const rankValue = rankOf(m, budget);
-  if (m.rows !== m.cols) return { matrix: m, rank: rankValue, spectralNote: `a ${m.rows}×${m.cols} matrix is not square` };
-  if (m.rows > config.maxMatrixSize) return { matrix: m, rank: rankValue, spectralNote: `over the size budget (${config.maxMatrixSize}×${config.maxMatrixSize})` };
-  try {
-    const s = spectrum(m, budget, { maxSize: config.maxMatrixSize });
-    const eigen = s.factors.map((g) => ({
-      ...rootsOfFactor(g.factor),
-      degree: g.factor.degree(),
-      algebraic: g.algebraicMultiplicity,
-      geometric: g.geometricMultiplicity,
-      blocks: g.jordanBlockSizes,
-    }));
-    return { matrix: m, rank: rankValue, spectrum: s, eigen };
-  } catch (error) {
-    if (error instanceof EngineError) return { matrix: m, rank: rankValue, spectralNote: error.message };
-    throw error;
-  }
-}
-
-function factoredLatex(p: Poly, variable: string): string {
+function factored(p: Poly, variable: string, flavour: 'latex' | 'text'): string {
   const { factors } = factorOverQ(p);
   if (factors.length === 0) return '1';
   return factors
     .map((f) => {
-      const base = f.factor.toLatex(variable);
+      const base = flavour === 'latex' ? f.factor.toLatex(variable) : f.factor.toString(variable).replace(/\*/g, '');
       const wrapped = factors.length === 1 && f.multiplicity === 1 ? base : `(${base})`;
-      return f.multiplicity === 1 ? wrapped : `${wrapped}^{${f.multiplicity}}`;
+      return f.multiplicity === 1 ? wrapped : flavour === 'latex' ? `${wrapped}^{${f.multiplicity}}` : `${wrapped}^${f.multiplicity}`;
     })
-    .join('');
+    .join(flavour === 'latex' ? '' : '·');
 }
 
-function factoredText(p: Poly, variable: string): string {
-  const { factors } = factorOverQ(p);
-  if (factors.length === 0) return '1';
-  return factors
-    .map((f) => {
-      const base = f.factor.toString(variable);
-      const wrapped = factors.length === 1 && f.multiplicity === 1 ? base : `(${base})`;
-      return f.multiplicity === 1 ? wrapped : `${wrapped}^${f.multiplicity}`;
-    })
-    .join('');
+function rootsText(g: EigenGroup): string {
+  if (g.roots.length) return g.roots.map((r) => formatScalar({ k: 'num', v: r }, 'text', TEXT_STYLE)).join(', ');
+  return `the ${g.factor.degree()} roots of ${g.factor.toString('x').replace(/\*/g, '')}`;
 }
 
-function matrixLatexOf(m: Matrix<Rational>): string {
-  const rows = m.toRows().map((r) => r.map((x) => x.toLatex()).join(' & '));
-  return `\\begin{pmatrix} ${rows.join(' \\\\ ')} \\end{pmatrix}`;
+function rootsLatex(g: EigenGroup): string {
+  if (g.roots.length) return g.roots.map((r) => numLatex(r)).join(',\\ ');
+  return `\\text{roots of } ${g.factor.toLatex('x')}`;
 }
 
 function eigenLine(g: EigenGroup): string {
-  const count = g.degree > 1 ? ` (each of the ${g.degree} roots)` : '';
-  const blocks = g.blocks.length ? `; Jordan blocks ${g.blocks.join(', ')}` : '';
-  return `${g.text}${count}: algebraic multiplicity ${g.algebraic}, geometric ${g.geometric}${blocks}`;
+  const each = g.factor.degree() > 1 ? ' (each)' : '';
+  return `${rootsText(g)} — algebraic multiplicity ${g.algebraic}${each}, geometric ${g.geometric}, Jordan blocks ${g.blocks.join(', ')}`;
 }
 
-/** Renders facts as hover Markdown and panel sections. */
-export function renderFacts(facts: MatrixFacts, name: string | undefined): Pick<MatrixDescription, 'markdown' | 'sections' | 'caution' | 'matrixLatex'> {
-  const m = facts.matrix;
-  const label = name ?? 'the matrix';
-  const lines: string[] = [];
+function stabilityLine(f: MatrixFacts): string | undefined {
+  const s = f.stability;
+  if (!s) return undefined;
+  const words = { 'asymptotically-stable': 'asymptotically stable', 'marginally-stable': 'marginally stable', unstable: 'unstable' }[s.verdict];
+  return `${s.notion === 'continuous' ? 'continuous time (ẋ = Ax)' : 'discrete time (x⁺ = Ax)'}: ${words} — ${s.reason}`;
+}
+
+/** The rendered description of a matrix's facts. */
+export function renderFacts(
+  facts: MatrixFacts,
+  name: string | undefined,
+  options: { hasDecimals?: boolean } = {},
+): Pick<MatrixDescription, 'markdown' | 'sections' | 'caution' | 'matrixLatex' | 'jordanLatex' | 'exponentialLatex'> {
+  const m = fromRationalMatrix(facts.matrix);
+  const label = name ?? 'A';
+  const md: string[] = [];
   const sections: { title: string; latex?: string; text?: string }[] = [];
-  lines.push(`**${name ? `${name}: ` : ''}${m.rows}×${m.cols} matrix**`);
-  lines.push('```text\n' + unicodeMatrix(m.toRows().map((r) => r.map((x) => x.toString()))) + '\n```');
-  sections.push({ title: 'Matrix', latex: `${name ? `${name} = ` : ''}${matrixLatexOf(m)}` });
-  const facts2: string[] = [`rank ${facts.rank}`];
   const s = facts.spectrum;
-  if (s) {
-    facts2.unshift(`det ${s.determinant.toString()}`, `trace ${s.trace.toString()}`);
-    lines.push(`- ${facts2.join(' · ')}`);
-    lines.push(`- characteristic polynomial: χ(λ) = ${s.charpoly.toString('λ')} = ${factoredText(s.charpoly, 'λ')}`);
-    lines.push(`- minimal polynomial: μ(λ) = ${factoredText(s.minimalPolynomial, 'λ')}`);
-    lines.push('- eigenvalues:');
-    for (const g of facts.eigen ?? []) lines.push(`  - ${eigenLine(g)}`);
-    sections.push({ title: 'Determinant, trace and rank', latex: `\\det = ${s.determinant.toLatex()},\\quad \\operatorname{tr} = ${s.trace.toLatex()},\\quad \\operatorname{rank} = ${facts.rank}` });
-    sections.push({ title: 'Characteristic polynomial', latex: `\\chi(\\lambda) = ${s.charpoly.toLatex('\\lambda')} = ${factoredLatex(s.charpoly, '\\lambda')}` });
-    sections.push({ title: 'Minimal polynomial', latex: `\\mu(\\lambda) = ${factoredLatex(s.minimalPolynomial, '\\lambda')}` });
-    sections.push({ title: 'Eigenvalues', text: (facts.eigen ?? []).map(eigenLine).join('\n') });
-  } else {
-    lines.push(`- ${facts2.join(' · ')}`);
-    if (facts.spectralNote) lines.push(`- no spectral facts: ${facts.spectralNote}`);
-    sections.push({ title: 'Rank', text: String(facts.rank) });
+  const head = [`${m.rows}×${m.cols}`];
+  if (s) head.push(`det ${s.determinant.toString()}`, `tr ${s.trace.toString()}`);
+  head.push(`rank ${facts.rank}`);
+  md.push(`**${name ?? 'Matrix'}** — ${head.join(' · ')}`);
+  md.push('```text\n' + unicode(m) + '\n```');
+  sections.push({ title: 'Matrix', latex: `${label} = ${matrixLatex(m, LATEX_STYLE)}` });
+  if (options.hasDecimals) {
+    const warn = 'Entries written as decimals are read as exact rationals. If they are measured or rounded, the Jordan structure is not robust: a nearby matrix can have a different one.';
+    md.push(`> ${warn}`);
+    sections.push({ title: 'Decimal entries', text: warn });
   }
-  void label;
-  return { markdown: lines.join('\n'), sections, caution: false, matrixLatex: matrixLatexOf(m) };
+  if (s) {
+    sections.push({ title: 'Determinant, trace and rank', latex: `\\det ${label} = ${s.determinant.toLatex()},\\quad \\operatorname{tr} ${label} = ${s.trace.toLatex()},\\quad \\operatorname{rank} ${label} = ${facts.rank}` });
+    md.push(`- χ(λ) = ${s.charpoly.toString('λ').replace(/\*/g, '')} = ${factored(s.charpoly, 'λ', 'text')}`);
+    md.push(`- μ(λ) = ${factored(s.minimalPolynomial, 'λ', 'text')}`);
+    sections.push({ title: 'Characteristic polynomial', latex: `\\chi_{${label}}(\\lambda) = ${s.charpoly.toLatex('\\lambda')} = ${factored(s.charpoly, '\\lambda', 'latex')}` });
+    sections.push({ title: 'Minimal polynomial', latex: `\\mu_{${label}}(\\lambda) = ${factored(s.minimalPolynomial, '\\lambda', 'latex')}` });
+    md.push('- eigenvalues:');
+    for (const g of facts.eigen ?? []) md.push(`  - ${eigenLine(g)}`);
+    sections.push({
+      title: 'Eigenvalues',
+      latex: (facts.eigen ?? []).map((g) => `${rootsLatex(g)}:\\ \\text{algebraic } ${g.algebraic},\\ \\text{geometric } ${g.geometric},\\ \\text{blocks } ${g.blocks.join(', ')}`).join(' \\\\ '),
+    });
+  } else if (facts.notes.spectrum) {
+    md.push(`- no spectral facts: ${facts.notes.spectrum}`);
+  }
+  let jordanLatex: string | undefined;
+  if (facts.jordan) {
+    md.push(`- Jordan form ${label} = X J X⁻¹ (verified: X⁻¹${label}X = J):`);
+    md.push('```text\n' + block('J = ', facts.jordan.J) + '\n\n' + block('X = ', facts.jordan.X) + '\n```');
+    const J = matrixLatex(facts.jordan.J, LATEX_STYLE);
+    const X = matrixLatex(facts.jordan.X, LATEX_STYLE);
+    jordanLatex = `${label} = X J X^{-1},\\quad J = ${J},\\quad X = ${X}`;
+    sections.push({ title: 'Jordan form (verified: X⁻¹AX = J)', latex: `J = ${J},\\qquad X = ${X}` });
+  } else if (facts.notes.jordan) {
+    md.push(`- Jordan form: ${facts.notes.jordan}`);
+  }
+  if (facts.chevalley) {
+    const { D, N, index } = facts.chevalley;
+    md.push(`- ${label} = D + N, D diagonalisable, N nilpotent, DN = ND, N^${index} = 0:`);
+    md.push('```text\n' + block('D = ', fromRationalMatrix(D)) + '\n\n' + block('N = ', fromRationalMatrix(N)) + '\n```');
+    sections.push({
+      title: `Jordan–Chevalley split ${label} = D + N (DN = ND, index of nilpotency ${index})`,
+      latex: `D = ${matrixLatex(fromRationalMatrix(D), LATEX_STYLE)},\\qquad N = ${matrixLatex(fromRationalMatrix(N), LATEX_STYLE)}`,
+    });
+  }
+  let exponentialLatex: string | undefined;
+  if (facts.exponential) {
+    md.push(`- e^{${label}t}:`);
+    md.push('```text\n' + unicode(facts.exponential) + '\n```');
+    exponentialLatex = `e^{${label} t} = ${matrixLatex(facts.exponential, LATEX_STYLE)}`;
+    sections.push({ title: `Exponential e^{${label}t}`, latex: exponentialLatex });
+  } else if (facts.notes.exponential) {
+    md.push(`- e^{${label}t}: ${facts.notes.exponential}`);
+  }
+  const stable = stabilityLine(facts);
+  if (stable) {
+    md.push(`- stability, ${stable}`);
+    sections.push({ title: 'Stability', text: stable });
+  }
+  const caution = Boolean(facts.exponential || facts.stability);
+  return { markdown: md.join('\n'), sections, caution, matrixLatex: matrixLatex(m, LATEX_STYLE), ...(jordanLatex ? { jordanLatex } : {}), ...(exponentialLatex ? { exponentialLatex } : {}) };
 }
 
 /** Describes the matrix under the cursor. */
@@ -136,26 +150,54 @@ export function describeAt(
   const budget = new Budget({ timeMs: config.timeBudgetMs, isCancelled: options.isCancelled });
   const target = walkStatementsTo(text, language, offset, config);
   if (!target) return undefined;
-  const rational = target.rational;
-  if (!rational) {
+  const base = { start: target.start, end: target.end, ...(target.name ? { name: target.name } : {}) };
+  if (!target.rational) {
     return {
-      start: target.start,
-      end: target.end,
-      ...(target.name ? { name: target.name } : {}),
-      markdown: `**${target.name ?? 'Matrix'}**: ${target.matrix.rows}×${target.matrix.cols}; its entries are not all rational, so only its size is shown.`,
+      ...base,
+      markdown: `**${target.name ?? 'Matrix'}** — ${target.matrix.rows}×${target.matrix.cols}; its entries are not all rational numbers, so only its size is shown.`,
       sections: [],
       caution: false,
     };
   }
   try {
-    const facts = matrixFacts(rational, config, budget);
-    return { start: target.start, end: target.end, ...(target.name ? { name: target.name } : {}), ...renderFacts(facts, target.name) };
+    const facts = matrixFacts(target.rational, config, budget, options.stability ?? 'continuous');
+    return { ...base, ...renderFacts(facts, target.name, { hasDecimals: target.hasDecimals }) };
   } catch (error) {
-    if (error instanceof EngineError) {
-      return { start: target.start, end: target.end, markdown: `**${target.name ?? 'Matrix'}**: ${error.message}`, sections: [], caution: false };
-    }
+    if (error instanceof EngineError) return { ...base, markdown: `**${target.name ?? 'Matrix'}**: ${error.message}`, sections: [], caution: false };
     throw error;
   }
+}
+
+function factsJson(facts: MatrixFacts): unknown {
+  const s = facts.spectrum;
+  const rows = (m: Matrix<Rational>) => m.toRows().map((r) => r.map((x) => x.toString()));
+  const latexRows = (m: Matrix<Scalar>) => m.toRows().map((r) => r.map((x) => formatScalar(x, 'latex', LATEX_STYLE)));
+  return {
+    rows: facts.matrix.rows,
+    cols: facts.matrix.cols,
+    matrix: rows(facts.matrix),
+    rank: facts.rank,
+    ...(s
+      ? {
+          determinant: s.determinant.toString(),
+          trace: s.trace.toString(),
+          characteristicPolynomial: s.charpoly.toString('x'),
+          minimalPolynomial: s.minimalPolynomial.toString('x'),
+          eigenvalues: (facts.eigen ?? []).map((g) => ({
+            factor: g.factor.toString('x'),
+            values: g.roots.map((r) => numLatex(r)),
+            algebraicMultiplicity: g.algebraic,
+            geometricMultiplicity: g.geometric,
+            jordanBlocks: g.blocks,
+          })),
+        }
+      : {}),
+    ...(facts.jordan ? { jordan: { J: latexRows(facts.jordan.J), X: latexRows(facts.jordan.X), verified: true } } : {}),
+    ...(facts.chevalley ? { chevalley: { D: rows(facts.chevalley.D), N: rows(facts.chevalley.N), nilpotencyIndex: facts.chevalley.index } } : {}),
+    ...(facts.exponential ? { exponential: latexRows(facts.exponential) } : {}),
+    ...(facts.stability ? { stability: { notion: facts.stability.notion, verdict: facts.stability.verdict, reason: facts.stability.reason } } : {}),
+    ...(Object.keys(facts.notes).length ? { notes: facts.notes } : {}),
+  };
 }
 
 /** `matrix-notary decompose`: one matrix from JSON rows or LaTeX, in text, LaTeX or JSON. */
@@ -171,41 +213,13 @@ export function decompose(source: string, format: 'text' | 'latex' | 'json', con
     throw error;
   }
   const rendered = renderFacts(facts, undefined);
-  if (format === 'json') {
-    const s = facts.spectrum;
-    return {
-      ok: true,
-      text: JSON.stringify(
-        {
-          rows: facts.matrix.rows,
-          cols: facts.matrix.cols,
-          matrix: facts.matrix.toRows().map((r) => r.map((x) => x.toString())),
-          rank: facts.rank,
-          ...(s
-            ? {
-                determinant: s.determinant.toString(),
-                trace: s.trace.toString(),
-                characteristicPolynomial: s.charpoly.toString('x'),
-                minimalPolynomial: s.minimalPolynomial.toString('x'),
-                eigenvalues: (facts.eigen ?? []).map((g) => ({
-                  value: g.text,
-                  latex: g.latex,
-                  algebraicMultiplicity: g.algebraic,
-                  geometricMultiplicity: g.geometric,
-                  jordanBlocks: g.blocks,
-                })),
-              }
-            : { note: facts.spectralNote }),
-        },
-        null,
-        2,
-      ),
-    };
-  }
+  const caution = rendered.caution ? `Caution: ${SAFETY_CAUTION}` : '';
+  if (format === 'json') return { ok: true, text: JSON.stringify({ ...(factsJson(facts) as object), ...(caution ? { caution: SAFETY_CAUTION } : {}) }, null, 2) };
   if (format === 'latex') {
-    return { ok: true, text: rendered.sections.filter((s) => s.latex).map((s) => `% ${s.title}\n\\[ ${s.latex} \\]`).join('\n') };
+    const body = rendered.sections.filter((x) => x.latex).map((x) => `% ${x.title}\n\\[ ${x.latex} \\]`);
+    if (caution) body.push(`% ${caution}`);
+    return { ok: true, text: body.join('\n') };
   }
-  const plain = rendered.markdown.replace(/```text\n|```/g, '').replace(/\*\*/g, '');
-  return { ok: true, text: rendered.caution ? `${plain}\n\nCaution: ${SAFETY_CAUTION}` : plain };
+  const plain = rendered.markdown.replace(/```text\n|```/g, '').replace(/\*\*/g, '').replace(/^> /gm, '');
+  return { ok: true, text: caution ? `${plain}\n\n${caution}` : plain };
 }
-

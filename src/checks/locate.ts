@@ -8,7 +8,7 @@ import { readStatements } from './checker';
 import { processStatement, type StatementContext } from './claims';
 import { Environment } from './environment';
 import { evaluate, displayName } from './evaluate';
-import { children } from './inspect';
+import { children, decimalPlaces } from './inspect';
 import { toRationalMatrix } from './operations';
 import type { Scalar } from './scalar';
 import type { CheckerConfig, DocumentLanguage } from './types';
@@ -21,6 +21,8 @@ export interface LocatedMatrix {
   readonly name?: string;
   readonly matrix: Matrix<Scalar>;
   readonly rational?: Matrix<Rational>;
+  /** True when the matrix was written with decimal entries. */
+  readonly hasDecimals?: boolean;
 }
 
 /** The innermost name or matrix literal at `offset` in a statement's trees. */
@@ -52,12 +54,12 @@ export function walkStatementsTo(text: string, language: DocumentLanguage, offse
     if (node.kind === 'symbol') {
       const def = env.lookup(node.key);
       if (!def) return undefined;
-      return { start: node.start, end: node.end, name: displayName(def.name), matrix: def.value, rational: toRationalMatrix(def.value) };
+      return { start: node.start, end: node.end, name: displayName(def.name), matrix: def.value, rational: toRationalMatrix(def.value), hasDecimals: def.hasDecimals };
     }
     try {
       const value = evaluate(node, { env, budget: new Budget({ timeMs: config.timeBudgetMs }), maxMatrixSize: config.maxMatrixSize, used: [] });
       if (value.kind !== 'matrix') return undefined;
-      return { start: node.start, end: node.end, matrix: value.value, rational: toRationalMatrix(value.value) };
+      return { start: node.start, end: node.end, matrix: value.value, rational: toRationalMatrix(value.value), hasDecimals: decimalPlaces(node) !== undefined };
     } catch (error) {
       if (error instanceof Undecidable) return undefined;
       throw error;
