@@ -24,13 +24,14 @@ import { type LatexNode, environmentName, groupText, parseLatexNodes } from './l
 import { scanLatexFallback } from './latex-fallback.js';
 
 /**
- * About how many characters one parse covers (rounded up to the next paragraph break). The
- * grammar memoises every rule at every position, so its cost grows faster than the input: on a
- * 400 kB math-dense note, chunks of ~1 000 characters scanned at about 3 µs per character,
- * 8 000 at 5 µs and 20 000 at 11 µs (test/document/measure-scan.ts). One paragraph per parse is
- * about the best.
+ * Each parse covers one paragraph: text from `from` to the line after the next blank line. The
+ * grammar memoises every rule at every position, so its cost grows faster than its input: on a
+ * 400 kB math-dense note (test/document/measure-scan.ts), parses of about one paragraph ran at
+ * about 3 µs per character, of 8 000 characters at 5 µs and of 20 000 at 11 µs. Paragraph-sized
+ * parses also keep their text stable while a note is edited elsewhere, so the cache in
+ * latex-parse.ts answers for every unchanged paragraph.
  */
-const CHUNK_SIZE = 1000;
+const CHUNK_SIZE = 1;
 
 /**
  * A single paragraph longer than this goes to the local scanner instead of the grammar, which

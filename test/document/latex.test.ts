@@ -162,6 +162,20 @@ describe('LaTeX offsets', () => {
     }
   });
 
+  it('gives the same result when unchanged paragraphs come from the parse cache', () => {
+    const note = Array.from({ length: 30 }, (_, i) => `P${i} $a_${i}$ and \\begin{align}x_${i} &= 1\\end{align} % $c$\n\n`).join('');
+    const first = scanDocument(note, 'latex');
+    assert.deepEqual(scanDocument(note, 'latex'), first);
+    // Insert a region in paragraph 10: everything after it moves by the inserted length.
+    const at = note.indexOf('P10 ');
+    const insert = '$new$ ';
+    const edited = scanDocument(note.slice(0, at) + insert + note.slice(at), 'latex');
+    const moved = first.regions.map((r) => (r.start < at ? r : { ...r, start: r.start + insert.length, end: r.end + insert.length, contentStart: r.contentStart + insert.length, contentEnd: r.contentEnd + insert.length }));
+    const added = edited.regions.filter((r) => r.start === at);
+    assert.equal(added.length, 1);
+    assert.deepEqual(edited.regions.filter((r) => r.start !== at), moved);
+  });
+
   it('scans a paragraph too long for the grammar with the local scanner', () => {
     const line = 'We get $a$ and \\(b\\) % not $c$\n';
     const text = line.repeat(Math.ceil(120_000 / line.length));
