@@ -14,6 +14,8 @@ export const problemCodes = Object.freeze({
   unterminatedVerbatim: 'document.unterminated-verbatim',
   /** The LaTeX parser failed on a passage; it was scanned by the local fallback scanner. */
   parserFallback: 'document.parser-fallback',
+  /** A bug in a scanner; the document is reported as having no regions rather than crashing. */
+  internalError: 'document.internal-error',
 });
 
 /**

@@ -5,16 +5,18 @@
 import type { DocumentLanguage, MathRegion, ScanOptions, ScanResult } from './types.js';
 import { scanMarkdown } from './markdown.js';
 import { scanLatex } from './latex.js';
+import { problemCodes } from './common.js';
 
 export type { DocumentLanguage, MathRegion, Problem, RegionDelimiter, RegionKind, RegionSelection, ScanOptions, ScanResult, TextRange } from './types.js';
 export { lineIndex } from './positions.js';
 export type { LineColumn, LineIndex } from './positions.js';
-export { problemCodes } from './common.js';
+export { problemCodes };
 
 /**
  * Finds every math region of SPEC §2 in `text`, in document order, and the problems met on the
- * way (unterminated delimiters and environments, stray closers, paragraph breaks inside LaTeX
- * math). `options.regions` switches kinds off (all are on by default).
+ * way (unclosed delimiters, fences and environments — in LaTeX math is unclosed at a paragraph
+ * break — stray closers, unclosed verbatim). `options.regions` switches kinds off (all are on by
+ * default). Regions never overlap; problems come sorted by position.
  */
 export function scanDocument(text: string, language: DocumentLanguage, options: ScanOptions = {}): ScanResult {
   let result: ScanResult;
@@ -26,7 +28,7 @@ export function scanDocument(text: string, language: DocumentLanguage, options: 
       regions: [],
       problems: [
         {
-          code: 'document.internal-error',
+          code: problemCodes.internalError,
           message: `the ${language} scanner failed: ${error instanceof Error ? error.message : String(error)}`,
           start: 0,
           end: 0,
