@@ -242,7 +242,9 @@ export type FunctionName =
  * - `\operatorname{diag}(a, b, c)` → `diag` with one argument per entry.
  * - `J_k(\lambda)` → `jordanBlock`, `subscript` = k, `args` = [λ].
  * - `\dim\ker A`, `\operatorname{nullity} A` → `nullity`.
- * An operator written without parentheses takes the product that follows it (SPEC §3).
+ * An operator written without parentheses takes the product that follows it (SPEC §3). For
+ * `rank`, `nullity`, `kernel` and `dim` parentheses never close the argument: `\dim\ker(A - 2I)^2`
+ * is the nullity of (A − 2I)², so `args` is [power(group, 2)] and `delimiters` is null.
  */
 export interface ApplyExpr extends Span {
   kind: 'apply';

@@ -59,9 +59,12 @@ export class Cursor {
     this.problems.push({ code, message, start: span.start, end: Math.max(span.start, span.end) });
   }
 
-  /** A zero-width error node at the current token, with a problem. */
+  /**
+   * A zero-width error node right after the last consumed token (so it lies inside whatever
+   * node is being built), with a problem.
+   */
   missing(what: string): ErrorExpr {
-    const at = this.peek().start;
+    const at = this.lastEnd();
     const found = this.peek();
     const detail = found.type === 'eof' ? 'the input ends' : `found “${found.value}”`;
     this.report('notation.missing-operand', `expected ${what} here, but ${detail}`, { start: at, end: at });

@@ -95,7 +95,7 @@ function jsonMatrix(value: JsonValue, problems: Problem[]): MatrixExpr | Expr {
     }
     rows.push(row.items.map((entry) => jsonEntry(entry, problems)));
   }
-  if (rows.length === 0) problems.push({ code: 'notation.empty-matrix', message: 'a matrix with no entries', ...span });
+  if (rows.every((r) => r.length === 0)) problems.push({ code: 'notation.empty-matrix', message: 'a matrix with no entries', ...span });
   const widths = new Set(rows.map((r) => r.length));
   if (widths.size > 1) problems.push({ code: 'notation.ragged-matrix', message: `the rows of this matrix have different numbers of entries (${[...widths].join(', ')})`, ...span });
   return { kind: 'matrix', environment: 'json', rows, delimiters: null, columnSpec: null, ...span };

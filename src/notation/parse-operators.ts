@@ -10,6 +10,9 @@ import { parseDelimitedArguments, startsDelimitedArguments, startsPrimary } from
 import { parseScriptArgument } from './parse-scripts';
 import { operatorCommands, operatorWords } from './vocabulary';
 
+/** Operators whose parenthesised argument may carry a power: `\operatorname{rank}(A - I)^2`. */
+const powerReadsInside: ReadonlySet<FunctionName> = new Set(['rank', 'nullity', 'kernel', 'dim']);
+
 /** Reads the operator name at the cursor; returns its meaning and how it was written. */
 function readOperatorName(c: Cursor): { func: FunctionName; name: string } {
   const t = c.next();
@@ -64,7 +67,11 @@ export function parseOperator(c: Cursor): Expr {
   }
   let args: Expr[];
   let delimiters: Delimiters | null = null;
-  if (startsDelimitedArguments(c)) {
+  if (startsDelimitedArguments(c) && powerReadsInside.has(func)) {
+    // `\dim\ker(A - 2I)^2` is the kernel of (A − 2I)², as in every text on Jordan chains: the
+    // parentheses group the argument's base, so the argument is the whole product that follows.
+    args = [parseProduct(c, true)];
+  } else if (startsDelimitedArguments(c)) {
     const parsed = parseDelimitedArguments(c);
     args = parsed.args;
     delimiters = parsed.delimiters;

@@ -8,6 +8,7 @@ import type { Cursor } from './cursor';
 import { parseCommaList } from './parse-expr';
 import { parsePrimary } from './parse-primary';
 import { symbolKey } from './symbols';
+import type { Token } from './tokens';
 
 /** What a script or argument turned out to be. `special` is set for T, H, *, ′ and friends. */
 export interface ScriptArgument {
@@ -76,6 +77,22 @@ export function primeScriptAt(c: Cursor, ahead: number): { primes: number; lengt
 export function parseScriptArgument(c: Cursor): ScriptArgument {
   const first = c.peek();
   if (c.is('{')) {
+    // Scripts nest like groups (`x^{x^{…}}`), so they pass the same depth guard.
+    if (!c.enter()) {
+      const skipped = c.skipUnit();
+      return { expr: skipped, braced: true, start: skipped.start, end: skipped.end, special: null };
+    }
+    try {
+      return parseBracedScript(c, first);
+    } finally {
+      c.leave();
+    }
+  }
+  return parseSingleScript(c, first);
+}
+
+function parseBracedScript(c: Cursor, first: Token): ScriptArgument {
+  {
     const len = shortGroupLength(c, 0, 4);
     if (len > 2) {
       const special = classifySpecial(c, 1, len - 2);
@@ -95,6 +112,9 @@ export function parseScriptArgument(c: Cursor): ScriptArgument {
     const expr: Expr = items.length === 1 ? items[0]! : { kind: 'list', elements: items, start: items[0]!.start, end: items[items.length - 1]!.end };
     return { expr, braced: true, start: first.start, end: c.lastEnd(), special: null };
   }
+}
+
+function parseSingleScript(c: Cursor, first: Token): ScriptArgument {
   // One token (or one command with its own arguments).
   for (const count of [4, 2, 1]) {
     const special = classifySpecial(c, 0, count);

@@ -166,6 +166,7 @@ class LatexPrinter {
     let head = e.name;
     if (e.nameSuperscript) head += `^${this.script(e.nameSuperscript, true)}`;
     if (e.subscript) head += `_${this.script(e.subscript, false)}`;
+    if (e.args.length === 0 && !e.delimiters) return head; // bare `\chi_A`
     const delimiters = e.delimiters ?? (forceParens || e.args.length !== 1 ? plainParens : null);
     if (delimiters) return glue(head, delimited(delimiters, e.args.map((a) => this.print(a, Level.DirectSum)).join(', ')));
     const arg = e.args[0]!;

@@ -197,8 +197,9 @@ function apply(e: ApplyExpr): Box {
     return beside(line('|'), printBox(e.args[0]!), line('|'));
   }
   if (e.func === 'exp' && (e.name === 'e' || e.name === '\\mathrm{e}')) {
-    const arg = e.args[0]!;
-    return levelOf(arg) >= 5 && text(arg).length === 1 ? line(`e^${text(arg)}`) : beside(line('e^('), printBox(arg), line(')'));
+    const arg = printBox(e.args[0]!);
+    const single = arg.lines.length === 1 ? arg.lines[0]! : '';
+    return width(single) === 1 ? line(`e^${single}`) : beside(line('e^('), arg, line(')'));
   }
   let head: string;
   if (e.func === 'charpoly' || e.func === 'minpoly' || e.func === 'jordanBlock') head = plainLetters(e.name);

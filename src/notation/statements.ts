@@ -154,11 +154,15 @@ function trimPunctuation(tokens: Token[]): Token[] {
 function dropProse(tokens: Token[]): Token[] {
   const out: Token[] = [];
   const scriptBraces: boolean[] = [];
+  let openScripts = 0;
   let previous: Token | undefined;
   for (const t of tokens) {
-    const inScript = scriptBraces.includes(true) || (previous?.type === 'char' && (previous.value === '_' || previous.value === '^'));
-    if (t.type === 'char' && t.value === '{') scriptBraces.push(previous?.type === 'char' && (previous.value === '_' || previous.value === '^'));
-    else if (t.type === 'char' && t.value === '}') scriptBraces.pop();
+    const afterScript = previous?.type === 'char' && (previous.value === '_' || previous.value === '^');
+    const inScript = openScripts > 0 || afterScript;
+    if (t.type === 'char' && t.value === '{') {
+      scriptBraces.push(afterScript);
+      if (afterScript) openScripts++;
+    } else if (t.type === 'char' && t.value === '}' && scriptBraces.pop()) openScripts--;
     if (t.type === 'text' && !inScript && !isOperatorText(t)) continue;
     out.push(t);
     previous = t;
@@ -198,6 +202,20 @@ function parseChain(tokens: Token[], problems: Problem[]): { terms: Expr[]; rela
   return { terms, relations, leadingRelation };
 }
 
+/** The problems (sorted by start) that start inside [start, end), found by binary search. */
+function problemsWithin(sorted: readonly Problem[], start: number, end: number): Problem[] {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (sorted[mid]!.start < start) lo = mid + 1;
+    else hi = mid;
+  }
+  const out: Problem[] = [];
+  for (let k = lo; k < sorted.length && sorted[k]!.start < end; k++) out.push(sorted[k]!);
+  return out;
+}
+
 /** Splits already-tokenised math into statements; `problems` are the tokenizer's. */
 export function splitTokens(allTokens: Token[], tokenProblems: Problem[], alignMode: boolean): SplitResult {
   let align = alignMode;
@@ -210,6 +228,7 @@ export function splitTokens(allTokens: Token[], tokenProblems: Problem[], alignM
   });
   const statements: Statement[] = [];
   const problems: Problem[] = [...tokenProblems];
+  const sortedTokenProblems = [...tokenProblems].sort((a, b) => a.start - b.start);
   for (const segment of splitSegments(tokens, align)) {
     for (const raw of splitAtCommas(segment.tokens)) {
       const trimmed = dropProse(trimPunctuation(raw));
@@ -236,8 +255,9 @@ export function splitTokens(allTokens: Token[], tokenProblems: Problem[], alignM
         const linkStart = continued && k === 0 ? relation.start : left.start;
         return { left, relation, right, continued: continued && k === 0, start: linkStart, end: Math.max(right.end, relation.end) };
       });
-      for (const p of tokenProblems) if (p.start >= start && p.start < end) own.push(p);
-      problems.push(...own.filter((p) => !tokenProblems.includes(p)));
+      const parserProblems = own.length;
+      own.push(...problemsWithin(sortedTokenProblems, start, end));
+      problems.push(...own.slice(0, parserProblems));
       statements.push({ start, end, terms, relations, links, continued, problems: own });
     }
   }
