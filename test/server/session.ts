@@ -222,7 +222,7 @@ export class ServerSession {
       else this.child.on('exit', (code) => r(code));
     });
     try {
-      await Promise.race([this.connection.sendRequest(ShutdownRequest.type), new Promise((r) => setTimeout(r, 5000))]);
+      await withDeadline(this.connection.sendRequest(ShutdownRequest.type), 5000, 'the shutdown answer');
       await this.connection.sendNotification(ExitNotification.type);
     } catch {
       // the process is gone already
@@ -232,6 +232,19 @@ export class ServerSession {
     clearTimeout(timer);
     this.connection.dispose();
     return code;
+  }
+}
+
+/** Resolves as `promise` does, or rejects when `deadlineMs` passes first (the timer is cleared). */
+export async function withDeadline<T>(promise: Promise<T>, deadlineMs: number, what: string): Promise<T> {
+  let timer: NodeJS.Timeout | undefined;
+  const deadline = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(new Error(`gave up waiting (after ${deadlineMs} ms) for ${what}`)), deadlineMs);
+  });
+  try {
+    return await Promise.race([promise, deadline]);
+  } finally {
+    clearTimeout(timer);
   }
 }
 
