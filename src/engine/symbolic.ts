@@ -254,3 +254,30 @@ export function parameterMatrix(rows: readonly (readonly (RationalFunction | MPo
     ),
   );
 }
+
+/**
+ * LaTeX for a polynomial in `variable` (e.g. "\\lambda") whose coefficients (x^0 up) are rational
+ * functions of parameters: "\lambda^{2} - \left(k_1 + 2 k_2\right) \lambda + k_1 k_2". Coefficients
+ * with more than one term are bracketed; a coefficient whose first term is negative is printed
+ * with the minus pulled out.
+ */
+export function parameterPolynomialLatex(coefficients: readonly RationalFunction[], variable = '\\lambda'): string {
+  const parts: string[] = [];
+  for (let k = coefficients.length - 1; k >= 0; k--) {
+    const c = coefficients[k];
+    if (c.isZero()) continue;
+    const power = k === 0 ? '' : k === 1 ? variable : `${variable}^{${k}}`;
+    // A minus in front when the numerator's first printed term is negative: −(k_1 + 2 k_2) λ.
+    const negative = c.num.termList()[0].coefficient.sign() < 0;
+    const body0 = (negative ? c.neg() : c).toLatex();
+    const single = c.isPolynomial() && c.num.size() === 1;
+    let body = body0;
+    if (power !== '') {
+      if (body === '1') body = power;
+      else body = single || !c.isPolynomial() ? `${body} ${power}` : `\\left(${body}\\right) ${power}`;
+    }
+    if (parts.length === 0) parts.push(negative ? `-${body}` : body);
+    else parts.push(negative ? `- ${body}` : `+ ${body}`);
+  }
+  return parts.length === 0 ? '0' : parts.join(' ');
+}

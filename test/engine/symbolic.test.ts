@@ -15,6 +15,7 @@ import {
   parameterDeterminant,
   parameterInverse,
   parameterMatrix,
+  parameterPolynomialLatex,
 } from '../../src/engine/symbolic';
 import { Rational } from '../../src/engine/rational';
 import { DomainError } from '../../src/engine/errors';
@@ -173,4 +174,13 @@ test('rational-function arithmetic with gcd reduction keeps values: seeded ops c
     if (!y.isZero() && !y.evaluate(point).isZero()) ops.push([x.div(y), x.evaluate(point).div(y.evaluate(point))]);
     for (const [r, v] of ops) assert.ok(r.evaluate(point).equals(v), `trial ${trial}`);
   }
+});
+
+test('charpoly of parameter matrices prints as a polynomial in λ with the caller\'s names', () => {
+  assert.equal(parameterPolynomialLatex(parameterCharpoly(spring2)), '\\lambda^{2} - \\left(k_1 + 2 k_2\\right) \\lambda + k_1 k_2');
+  const w = RF.variable('\\omega');
+  const rotation = parameterMatrix([[0, w], [w.neg(), 0]]);
+  assert.equal(parameterPolynomialLatex(parameterCharpoly(rotation), 's'), 's^{2} + \\omega^{2}');
+  const damped = parameterMatrix([[0, 1], [k1.neg().div(RF.variable('m')), 0]]);
+  assert.equal(parameterPolynomialLatex(parameterCharpoly(damped)), '\\lambda^{2} + \\frac{k_1}{m}');
 });
