@@ -95,8 +95,12 @@ function toFixed(x: number, bits: number): bigint {
   return shift >= 0 ? m << BigInt(shift) : m >> BigInt(-shift);
 }
 
-/** Aberth iterations in fixed point with `bits` fraction bits. */
-function fixedAberth(p: IntPoly, z: Approximation[], bits: number, rounds: number): void {
+/**
+ * Aberth iterations in fixed point with `bits` fraction bits, until the largest correction is a
+ * few units of 2^-bits (converged at this precision) or `maxRounds` rounds have run. Clusters
+ * converge only linearly at first, hence the generous cap rather than a fixed round count.
+ */
+function fixedAberth(p: IntPoly, z: Approximation[], bits: number, maxRounds: number): void {
   const n = p.length - 1;
   const B = BigInt(bits);
   const one = 1n << B;
@@ -107,7 +111,8 @@ function fixedAberth(p: IntPoly, z: Approximation[], bits: number, rounds: numbe
     if (den === 0n) return undefined;
     return [((ar * br + ai * bi) << B) / den, ((ai * br - ar * bi) << B) / den];
   };
-  for (let r = 0; r < rounds; r++) {
+  for (let r = 0; r < maxRounds; r++) {
+    let largest = 0n;
     for (let i = 0; i < n; i++) {
       const { re, im } = z[i];
       let pr = coeffs[n], pi = 0n, dr = 0n, di = 0n;
@@ -132,8 +137,34 @@ function fixedAberth(p: IntPoly, z: Approximation[], bits: number, rounds: numbe
       const corr = div(w[0], w[1], one - wsr, -wsi);
       if (!corr) continue;
       z[i] = { re: re - corr[0], im: im - corr[1] };
+      const size = (corr[0] < 0n ? -corr[0] : corr[0]) + (corr[1] < 0n ? -corr[1] : corr[1]);
+      if (size > largest) largest = size;
     }
+    if (largest <= 16n) break;
   }
+}
+
+/**
+ * Nudges each approximation by 1/64 of the distance to its nearest neighbour, in alternating
+ * diagonal directions. Real polynomials can trap Aberth's iterates on the real axis (real
+ * iterates stay real), which never reaches a close complex pair; a small non-real nudge frees them.
+ */
+function perturbClusters(z: Approximation[]): void {
+  const abs = (x: bigint) => (x < 0n ? -x : x);
+  const nearest = z.map((a, i) => {
+    let best = -1n;
+    z.forEach((b, j) => {
+      if (j === i) return;
+      const d = abs(a.re - b.re) + abs(a.im - b.im);
+      if (best < 0n || d < best) best = d;
+    });
+    return best < 0n ? 0n : best;
+  });
+  z.forEach((a, i) => {
+    const step = nearest[i] / 64n;
+    const sign = i % 2 === 0 ? 1n : -1n;
+    z[i] = { re: a.re + step, im: a.im + sign * step };
+  });
 }
 
 /** Exact certified radii: disk i is D(z_i, n|W_i|), its radius bounded above by a dyadic rational. */
@@ -199,7 +230,7 @@ export class ComplexRootLocator {
             re: toFixed(Math.cos((2 * Math.PI * i) / n + 0.4) * 2, this.bits),
             im: toFixed(Math.sin((2 * Math.PI * i) / n + 0.4) * 2, this.bits),
           }));
-      fixedAberth(this.poly, this.z, this.bits, 3);
+      fixedAberth(this.poly, this.z, this.bits, 80);
     }
     const smallEnough = (disks: Disk[]) => !maxRadius || disks.every((d) => d.radius.compare(maxRadius) <= 0);
     // The last certified set may already be fine enough (refining roots one after another).
@@ -225,9 +256,9 @@ export class ComplexRootLocator {
       }
       const shift = BigInt(newBits - this.bits);
       this.z = this.z.map((a) => ({ re: a.re << shift, im: a.im << shift }));
-      const rounds = Math.ceil(Math.log2(newBits / this.bits)) + 2;
+      if (!acceptable) perturbClusters(this.z);
       this.bits = newBits;
-      fixedAberth(this.poly, this.z, this.bits, rounds);
+      fixedAberth(this.poly, this.z, this.bits, 80);
     }
     throw new BudgetError(`complex root certification did not converge within ${MAX_BITS} bits`);
   }

@@ -122,6 +122,16 @@ test('close complex pairs: (x^2 + 1)(10^8 x^2 + 10^8 + 1) gives four separated d
   assert.deepEqual(roots.map((r) => r.imagPartDecimal(12)).sort(), ['-1.000000005000', '-1.000000000000', '1.000000000000', '1.000000005000'].sort());
 });
 
+test('a complex pair 2·10^-20 apart next to a double root of the floating-point image', () => {
+  // 10^40 (x − 1)^2 + 1 has roots 1 ± 10^-20 i (by hand); in doubles the constant term rounds to
+  // 10^40, a double real root, so the certified path must leave the real axis on its own.
+  const p = Poly.fromInts([10n ** 40n + 1n, -2n * 10n ** 40n, 10n ** 40n]);
+  const roots = complexRoots(p);
+  assert.equal(roots.length, 2);
+  assert.deepEqual(roots.map((r) => r.imagPartDecimal(25)), ['-0.0000000000000000000100000', '0.0000000000000000000100000']);
+  assert.deepEqual(roots.map((r) => r.realPartDecimal(25)), ['1.0000000000000000000000000', '1.0000000000000000000000000']);
+});
+
 const sympyMissing = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
   ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)'
   : false;
