@@ -39,11 +39,10 @@ export function startsPrimary(c: Cursor, ahead: number): boolean {
         startsName(c, ahead) ||
         fractionCommands.has(t.value) ||
         t.value === '\\sqrt' ||
-        (sizingOpen.has(t.value) && !sizingClose.has(t.value)) ||
+        (sizingOpen.has(t.value) && opensAfterSizing(c, ahead + 1)) ||
         t.value === '\\{' ||
         t.value === '\\lbrace' ||
-        t.value === '\\|' ||
-        t.value === '\\lVert' ||
+        ((t.value === '\\|' || t.value === '\\lVert' || t.value === '\\Vert') && c.barsDepth === 0) ||
         ellipsisCommands.has(t.value) ||
         t.value === '\\operatorname' ||
         operatorAt(c, ahead)
@@ -51,6 +50,14 @@ export function startsPrimary(c: Cursor, ahead: number): boolean {
     default:
       return false;
   }
+}
+
+/** True when the token at `ahead` (after `\left`, `\big`, …) is an opening delimiter. */
+function opensAfterSizing(c: Cursor, ahead: number): boolean {
+  const d = c.peek(ahead);
+  if (d.type !== 'char' && d.type !== 'command') return false;
+  if (d.value === '|' || d.value === '\\vert' || d.value === '\\|' || d.value === '\\Vert') return c.barsDepth === 0 || c.peek(ahead - 1).value === '\\left';
+  return openDelimiters.has(d.value);
 }
 
 /** Parses one primary; deeper than the nesting limit, the unit is skipped with a problem. */
@@ -180,7 +187,7 @@ function parseDelimitedContent(c: Cursor): { items: Expr[]; delimiters: Delimite
     if (junk) c.report('notation.unexpected', 'this part is not understood inside the brackets', junk);
   }
   if (isClosingHere(c, sizedOpen)) {
-    if (c.peek().type === 'command' && sizingClose.has(c.peek().value)) sizedClose = c.next().value;
+    if (c.peek().type === 'command' && (sizingClose.has(c.peek().value) || isBareSizedClose(c))) sizedClose = c.next().value;
     close = c.next().value;
   } else {
     c.report('notation.unclosed-delimiter', `the bracket “${open}” opened here is not closed`, { start: first.start, end: openTok.end });
@@ -194,9 +201,18 @@ function isClosingToken(c: Cursor, value: string, sizedOpen: string | null): boo
   return closeDelimiters.has(value) && value !== '.' && (value !== '|' || c.barsDepth >= 0);
 }
 
+/** `\big)`, `\Big]`: a non-directional sizing command directly before a closing delimiter. */
+function isBareSizedClose(c: Cursor): boolean {
+  const t = c.peek();
+  if (t.type !== 'command' || !sizingOpen.has(t.value) || t.value === '\\left' || t.value.endsWith('l')) return false;
+  const after = c.peek(1);
+  return (after.type === 'char' || after.type === 'command') && closeDelimiters.has(after.value) && after.value !== '.';
+}
+
 function isClosingHere(c: Cursor, sizedOpen: string | null): boolean {
   const t = c.peek();
   if (t.type === 'command' && sizingClose.has(t.value)) return true;
+  if (isBareSizedClose(c)) return sizedOpen !== '\\left';
   if (sizedOpen === '\\left') return false;
   return (t.type === 'char' || t.type === 'command') && closeDelimiters.has(t.value) && t.value !== '.';
 }
@@ -216,7 +232,7 @@ export function parseDelimited(c: Cursor): Expr {
   }
   const only = items.length === 1 ? items[0]! : null;
   const bars = open === '|' || open === '\\lvert' || open === '\\vert';
-  if (only && only.kind === 'matrix' && only.delimiters === null && (only.environment === 'array' || only.environment === 'matrix')) {
+  if (only && only.kind === 'matrix' && only.delimiters === null && (only.environment === 'array' || only.environment === 'matrix' || only.environment === 'smallmatrix')) {
     const matrix = { ...only, delimiters, start, end };
     if (bars) return { kind: 'apply', func: 'det', name: delimiters.sizedOpen ? `${delimiters.sizedOpen}|` : '|', args: [matrix], subscript: null, nameSuperscript: null, delimiters: null, start, end };
     return matrix;

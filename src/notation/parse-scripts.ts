@@ -4,7 +4,7 @@
  * transpose or prime are recognised from their tokens before any expression parsing.
  */
 import type { Expr, SymbolExpr } from './ast';
-import type { Cursor } from './cursor';
+import { relationAt, type Cursor } from './cursor';
 import { parseCommaList } from './parse-expr';
 import { parsePrimary } from './parse-primary';
 import { symbolKey } from './symbols';
@@ -152,8 +152,10 @@ export function closeBrace(c: Cursor, openStart: number): void {
     c.next();
     return;
   }
+  // `_{t=0}`, `_{k=1}`: a relation inside a script is a range or an evaluation point, not an error.
+  const quiet = relationAt(c) !== null;
   const junk = c.skipUntil((t) => t.type === 'char' && t.value === '}');
-  if (junk) c.report('notation.unexpected', 'this part of the group is not understood', junk);
+  if (junk && !quiet) c.report('notation.unexpected', 'this part of the group is not understood', junk);
   // At the end of the input the tokenizer has already reported the unclosed brace.
   if (c.is('}')) c.next();
   else if (!junk && !c.atEnd()) c.report('notation.unbalanced-brace', 'the group opened here is not closed with }', { start: openStart, end: openStart + 1 });

@@ -140,6 +140,18 @@ const shapes: [string, string][] = [
   ['\\{2 \\pm i\\}', 'set(pm(2, const:i))'],
   ['\\left\\{ 1 \\pm \\sqrt{2} \\right\\}', 'set(pm(1, sqrt(2)))'],
   ['\\{\\}', 'set()'],
+  ['\\left[\\begin{smallmatrix} 4 & -2 \\\\ -3 & 1 \\end{smallmatrix}\\right]', 'smallmatrix[4 neg(2); neg(3) 1]'],
+  ['\\left(\\begin{matrix} 1 & 2 \\end{matrix}\\right)', 'matrix[1 2]'],
+  ['\\begin{pmatrix} 1 & \\cdots \\\\ \\vdots & \\ddots \\end{pmatrix}', 'pmatrix[1 ...; ... ...]'],
+  ['\\begin{pmatrix} 1 & 2 \\\\[2pt] 3 & 4 \\end{pmatrix}', 'pmatrix[1 2; 3 4]'],
+  // sizing and other delimiters
+  ['\\bigl( A + B \\bigr) C', 'multiply((add(A, B)), C)'],
+  ['\\big( A + B \\big) C', 'multiply((add(A, B)), C)'],
+  ['\\lvert A \\rvert', 'det(A)'],
+  ['\\| A \\|_2', 'index(other(A), 2)'],
+  ['\\left. x \\right|_{t=0}', 'index((x), t)'],
+  ['\\det\\left(A - \\lambda I\\right)', 'det(subtract(A, multiply(\\lambda, I)))'],
+  ['\\exp\\left(At\\right)', 'exp(multiply(A, t))'],
 ];
 
 test('expression forms parse to the expected trees', () => {
