@@ -19,6 +19,7 @@ import {
 } from '../../src/engine/symbolic';
 import { Rational } from '../../src/engine/rational';
 import { DomainError } from '../../src/engine/errors';
+import { NumberField } from '../../src/engine/numberfield';
 import { SYMBOLIC_SCRIPT, runPythonJson } from './sympy-diff-harness';
 
 const k1 = RF.variable('k_1');
@@ -83,7 +84,9 @@ test('simplification: content, monomials, exact division and univariate gcd; equ
   assert.throws(() => RF.of(x, MPoly.ZERO), RangeError);
 });
 
-test('singular parameter matrices and oversized ones are refused with typed errors', () => {
+test('singular parameter matrices, oversized ones and parameters with Q(α) are refused with typed errors', () => {
+  const gauss = NumberField.gaussian();
+  assert.throws(() => unify(spring2, Matrix.identity(gauss, 2)), DomainError);
   const s = parameterMatrix([[k1, k2], [k1.mul(k1), k1.mul(k2)]]);
   assert.ok(parameterDeterminant(s).isZero());
   assert.throws(() => parameterInverse(s), DomainError);
