@@ -55,6 +55,8 @@ export interface SessionOptions {
   readonly pullConfiguration: boolean;
   /** The `matrixNotary` section the client answers configuration requests with. */
   readonly settings?: Record<string, unknown>;
+  /** The server script to run (default: the bundled dist/server.js). */
+  readonly server?: string;
 }
 
 /** Waits until `check()` returns a value, polling on every event, or fails after `deadlineMs`. */
@@ -101,8 +103,8 @@ export class ServerSession {
 
   /** Starts the bundled server and runs the initialize handshake. */
   static async start(options: SessionOptions): Promise<ServerSession> {
-    assertServerBuilt();
-    const child = spawn(process.execPath, [SERVER, '--stdio'], { cwd: ROOT, stdio: 'pipe' });
+    if (!options.server) assertServerBuilt();
+    const child = spawn(process.execPath, [options.server ?? SERVER, '--stdio'], { cwd: ROOT, stdio: 'pipe' });
     const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
     const session = new ServerSession(child, connection, options);
     connection.onNotification(PublishDiagnosticsNotification.type, (params) => session.receive(params));
