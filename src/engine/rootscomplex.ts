@@ -17,7 +17,7 @@ import type { Budget } from './errors';
 import { BudgetError } from './errors';
 import { Rational } from './rational';
 import { type IntPoly, ceilSqrt } from './intpoly';
-import { type Disk, disksIntersect } from './disk';
+import type { Disk } from './disk';
 
 /** Precision ceiling: roots closer than about 2^-MAX_BITS are refused rather than chased forever. */
 const MAX_BITS = 1 << 16;
@@ -168,11 +168,18 @@ function perturbClusters(z: Approximation[]): void {
 }
 
 /** Exact certified radii: disk i is D(z_i, n|W_i|), its radius bounded above by a dyadic rational. */
-function certifiedDisks(p: IntPoly, z: Approximation[], bits: number): Disk[] | undefined {
+/** A certified disk in integer units of 2^-(bits+8): centre (re, im), radius r. */
+interface ScaledDisk {
+  re: bigint;
+  im: bigint;
+  r: bigint;
+}
+
+function certifiedDisks(p: IntPoly, z: Approximation[], bits: number): ScaledDisk[] | undefined {
   const n = p.length - 1;
   const D = 1n << BigInt(bits);
   const lead = p[n];
-  const disks: Disk[] = [];
+  const disks: ScaledDisk[] = [];
   for (let i = 0; i < n; i++) {
     const { re: zr, im: zi } = z[i];
     // V = Σ c_k Z^k D^(n−k) = D^n · p(z_i), by homogenised Horner.
@@ -196,7 +203,7 @@ function certifiedDisks(p: IntPoly, z: Approximation[], bits: number): Disk[] | 
     // radius ≤ R / 2^(bits+8) with R = ⌈√(num·4^(bits+8)/den)⌉.
     const S = BigInt(bits + 8);
     const R = ceilSqrt((num << (2n * S)) / den + 1n);
-    disks.push({ re: Rational.of(zr, D), im: Rational.of(zi, D), radius: Rational.of(R, 1n << S) });
+    disks.push({ re: zr << 8n, im: zi << 8n, r: R });
   }
   return disks;
 }
@@ -237,8 +244,10 @@ export class ComplexRootLocator {
     if (this.disks.length > 0 && smallEnough(this.disks)) return this.disks;
     for (let attempt = 0; attempt < 40 && this.bits <= MAX_BITS; attempt++) {
       budget?.tick(n * n * Math.ceil(this.bits / 8));
-      const disks = certifiedDisks(this.poly, this.z, this.bits);
-      const acceptable = disks !== undefined && this.acceptable(disks);
+      const scaled = certifiedDisks(this.poly, this.z, this.bits);
+      const acceptable = scaled !== undefined && this.acceptable(scaled);
+      const unit = 1n << BigInt(this.bits + 8);
+      const disks = acceptable ? scaled.map((d) => ({ re: Rational.of(d.re, unit), im: Rational.of(d.im, unit), radius: Rational.of(d.r, unit) })) : [];
       if (acceptable && smallEnough(disks)) {
         this.disks = disks;
         return disks;
@@ -263,9 +272,17 @@ export class ComplexRootLocator {
     throw new BudgetError(`complex root certification did not converge within ${MAX_BITS} bits`);
   }
 
-  private acceptable(disks: Disk[]): boolean {
-    for (let i = 0; i < disks.length; i++) for (let j = i + 1; j < disks.length; j++) if (disksIntersect(disks[i], disks[j])) return false;
-    const offAxis = disks.filter((d) => d.im.abs().compare(d.radius) > 0).length;
+  /** All disks pairwise disjoint and exactly n − realCount of them clear of the real axis (exact, in integers). */
+  private acceptable(disks: ScaledDisk[]): boolean {
+    for (let i = 0; i < disks.length; i++) {
+      for (let j = i + 1; j < disks.length; j++) {
+        const dr = disks[i].re - disks[j].re;
+        const di = disks[i].im - disks[j].im;
+        const s = disks[i].r + disks[j].r;
+        if (dr * dr + di * di <= s * s) return false;
+      }
+    }
+    const offAxis = disks.filter((d) => (d.im < 0n ? -d.im : d.im) > d.r).length;
     return offAxis === disks.length - this.realCount;
   }
 }
