@@ -5,7 +5,7 @@
  */
 export type * from './ast';
 export { splitStatements } from './statements';
-export { parseNotaryLine, type NotaryLine } from './notary-line';
+export { parseNotaryLine, parseJsonMatrix, type NotaryLine } from './notary-line';
 export { parseMathExpression, type ParsedExpression } from './parse';
 export { symbolKey } from './symbols';
 export { childrenOf, walkExpr, someExpr, stripPositions, exprEquals, treeDepth, maxTreeDepth } from './tree';

@@ -68,6 +68,23 @@ function jsonDefinition(text: string, start: number, tokens: ReturnType<typeof t
   return { kind: 'matrix', statements: [statement], problems };
 }
 
+/**
+ * Parses a bare JSON matrix such as `[[4, 1], [0, 4]]` (the command line's `decompose` input);
+ * `start` is the absolute offset of `text`. Entries follow the notary-block rules.
+ */
+export function parseJsonMatrix(text: string, start = 0): { expr: Expr; problems: Problem[] } {
+  const problems: Problem[] = [];
+  const lead = text.length - text.trimStart().length;
+  const { value, next } = readJson(text, lead, start, problems);
+  const rest = text.slice(next);
+  if (rest.trim() !== '') {
+    const from = next + rest.length - rest.trimStart().length;
+    problems.push({ code: 'notation.unexpected', message: 'text after the matrix is not understood', start: start + from, end: start + text.trimEnd().length });
+  }
+  const expr = value ? jsonMatrix(value, problems) : { kind: 'error' as const, start: start + lead, end: start + lead };
+  return { expr, problems };
+}
+
 function parseSide(tokens: ReturnType<typeof tokenize>['tokens'], problems: Problem[]): Expr {
   const last = tokens[tokens.length - 1]!;
   const c = new Cursor([...tokens, { type: 'eof', value: '', start: last.end, end: last.end }], problems);

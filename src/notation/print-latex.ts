@@ -5,8 +5,8 @@
  * how the checks layer prints a correct value in the user's notation. Parentheses are added only
  * where a synthesised tree needs them to read back correctly.
  */
-import type { ApplyExpr, Delimiters, Expr, MatrixExpr } from './ast';
-import { formatMatrixLatex } from './format';
+import type { ApplyExpr, Delimiters, Expr, FractionExpr, MatrixExpr } from './ast';
+import { formatDecimal, formatMatrixLatex } from './format';
 import type { NotationStyle } from './style';
 
 /** Binding strength: a child printed in a slot that needs more gets parentheses. */
@@ -88,6 +88,8 @@ class LatexPrinter {
       case 'number':
         return e.text;
       case 'fraction': {
+        const decimal = this.asDecimal(e);
+        if (decimal !== null) return decimal;
         const form = this.style?.fraction ?? e.form;
         if (form === 'slash') return `${this.print(e.numerator, Level.Product)}/${this.print(e.denominator, Level.Postfix)}`;
         return `\\${form}{${this.print(e.numerator)}}{${this.print(e.denominator)}}`;
@@ -136,6 +138,15 @@ class LatexPrinter {
       case 'error':
         return '?';
     }
+  }
+
+  /** With a decimal style, a fraction of two integers prints rounded to the user's places. */
+  private asDecimal(e: FractionExpr): string | null {
+    if (!this.style?.decimals) return null;
+    const n = e.numerator;
+    const d = e.denominator;
+    if (n.kind !== 'number' || d.kind !== 'number' || n.isDecimal || d.isDecimal || /^0+$/.test(d.text)) return null;
+    return formatDecimal(BigInt(n.text), BigInt(d.text), Math.max(1, this.style.decimalPlaces ?? 1));
   }
 
   private product(left: Expr, right: Expr, operator: string): string {

@@ -98,8 +98,12 @@ function splitSegments(tokens: readonly Token[], align: boolean): Segment[] {
         continue;
       }
       if (t.type === 'char' && t.value === '&') {
+        // In `eqnarray` (`A &=& B`) the second `&` follows the relation: it ends no column pair.
+        const afterRelation = current.length > 0 && isRelationToken(current, current.length - 1);
+        // An `&` that opens an empty column pair (`A &= B && C &= D`) is not counted.
+        if (current.length === 0 && ampersands > 0) continue;
         ampersands++;
-        if (align && ampersands % 2 === 0) close();
+        if (align && ampersands % 2 === 0 && !afterRelation) close();
         continue;
       }
     }

@@ -2,7 +2,7 @@
 // JSON escapes into the document, LaTeX statement lines, and shape problems.
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
-import { parseNotaryLine, splitStatements, type MatrixExpr } from '../../src/notation/index';
+import { parseJsonMatrix, parseNotaryLine, splitStatements, type MatrixExpr } from '../../src/notation/index';
 import { checkSpans, shape, textOf } from './helpers';
 
 /** Places `line` after some text so offsets are visibly absolute. */
@@ -99,4 +99,15 @@ test('bad JSON matrices are reported with positions, never thrown', () => {
     assert.ok(r.problems.some((p) => p.code === code), `${line}: ${JSON.stringify(r.problems)}`);
     for (const p of r.problems) assert.ok(p.start >= 50 && p.end <= 50 + line.length && p.start <= p.end, `${line}: ${JSON.stringify(p)}`);
   }
+});
+
+test('a bare JSON matrix (command-line input) parses with offsets from its start', () => {
+  const text = '  [[1, "1/2"], [0, 1]] ';
+  const r = parseJsonMatrix(text, 100);
+  assert.deepEqual(r.problems, []);
+  assert.equal(shape(r.expr), 'json[1 frac(1, 2); 0 1]');
+  assert.equal(r.expr.start, 102);
+  const bad = parseJsonMatrix('[[1, 2]] tail', 0);
+  assert.ok(bad.problems.some((p) => p.code === 'notation.unexpected' && p.start === 9));
+  assert.ok(parseJsonMatrix('', 0).problems.length > 0);
 });

@@ -59,6 +59,8 @@ test('a style read from the user’s writing is applied to printed values', () =
   const printed = toLatex(value, style);
   assert.match(printed, /^\\left\[\\begin\{array\}\{cc\}/);
   assert.match(printed, /\\right\]$/);
+  // Fractions of integers print as decimals to the places the user wrote.
+  assert.equal(toLatex(expr('\\begin{pmatrix} \\frac{1}{3} & -\\frac{2}{3} \\end{pmatrix}'), style), '\\left[\\begin{array}{cc} 0.33 & -0.67 \\end{array}\\right]');
   const slashStyle = detectStyle(expr('\\begin{bmatrix} 1/2 & 1 \\end{bmatrix}'));
   assert.equal(slashStyle.fraction, 'slash');
   assert.equal(toLatex(value, slashStyle), '\\begin{bmatrix} 1/2 & 1 \\\\ 0 & 2 \\end{bmatrix}');
