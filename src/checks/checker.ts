@@ -65,7 +65,7 @@ export function createChecker(parts: CheckerParts = {}): Checker {
     const isCancelled = options.isCancelled ?? (() => false);
     const { statements, problems } = readStatements(text, language, config);
     const env = new Environment();
-    const ctx: StatementContext = { text, env, config, isCancelled, plain: (e) => plainText(e, text) };
+    const ctx: StatementContext = { text, env, config, isCancelled, plain: (e) => plainText(e, text), state: { previousWasClaim: false } };
     const claims: ClaimResult[] = [];
     const summaries = new Map<MathRegion, RegionSummary & { holds: number; fails: number; unchecked: number }>();
     for (const { statement, region } of statements) {

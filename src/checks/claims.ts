@@ -26,6 +26,8 @@ export interface StatementContext {
   readonly plain: (e: Expr) => string;
   /** Bind definitions only, deciding no claims (for hovers, which need the names in scope). */
   readonly definitionsOnly?: boolean;
+  /** Carried from statement to statement: whether the previous one was a claim about matrices. */
+  readonly state: { previousWasClaim: boolean; chainHead?: Expr };
 }
 
 const RESERVED = new Set(['I', 'e', 'i', '\\pi']);
@@ -49,14 +51,21 @@ function unwrap(e: Expr): Expr {
 /** Processes one statement: binds definitions in `ctx.env` and returns the claims' verdicts. */
 export function processStatement(statement: Statement, ctx: StatementContext): ClaimResult[] {
   const results: ClaimResult[] = [];
+  // A chain is one claim about matrices when any link is (`\det A = 2 \cdot 3 = 7` claims 6 = 7
+  // too), and an align continuation line (`&= 5`) continues the claim of the line above.
+  const chainIsClaim =
+    statement.links.some((l) => involvesMatrix(l.left, ctx.env) || involvesMatrix(l.right, ctx.env)) ||
+    (statement.continued && ctx.state.previousWasClaim);
+  if (!(statement.continued && ctx.state.previousWasClaim)) ctx.state.chainHead = statement.links[0]?.left;
   statement.links.forEach((link, index) => {
-    const result = processLink(link, index, statement, ctx);
+    const result = processLink(link, index, statement, ctx, chainIsClaim);
     if (result) results.push(result);
   });
+  ctx.state.previousWasClaim = chainIsClaim;
   return results;
 }
 
-function processLink(link: Link, index: number, statement: Statement, ctx: StatementContext): ClaimResult | undefined {
+function processLink(link: Link, index: number, statement: Statement, ctx: StatementContext, chainIsClaim: boolean): ClaimResult | undefined {
   const left = unwrap(link.left);
   const relation = link.relation.kind;
   const isFirst = index === 0 && !statement.continued && !link.continued;
@@ -71,7 +80,7 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   }
 
   if (ctx.definitionsOnly) return undefined;
-  const involves = involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
+  const involves = chainIsClaim || involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
   if (!involves && relation !== 'similar') return undefined;
   return decideClaim(link, ctx);
 }
@@ -193,6 +202,9 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
     if (!(error instanceof Undecidable)) throw error;
     return uncheckedFor(error, link, ctx, related(ec), caution);
   }
+  // Further links of a chain name its head: in `\operatorname{tr} A = 5 = 6` the second link says "tr A is 5, not 6".
+  const head = ctx.state.chainHead;
+  const inChain = head !== undefined && computedExpr === link.left && link.left !== head && isLiteralValue(link.left, ctx.env);
   const computedPlain = ctx.plain(computedExpr);
   const claimedPlain = ctx.plain(claimedExpr);
   const shown = comparison.listForm === 'set' && computed.kind === 'list' ? { kind: 'list' as const, elements: distinctScalars(computed.elements) } : computed;
@@ -224,7 +236,8 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
   }
   const fixable = isLiteralValue(claimedExpr, ctx.env) && !(computed.kind === 'matrix' && claimed.kind !== 'matrix');
   const fix: TextEdit | undefined = fixable ? { offset: claimedExpr.start, length: claimedExpr.end - claimedExpr.start, text: expected } : undefined;
-  return result(link, ctx, 'fails', `${family}.mismatch`, `${computedPlain} is ${expectedText}, not ${claimedPlain}`, related(ec), {
+  const message = inChain ? `${computedPlain} ≠ ${claimedPlain} in the chain for ${ctx.plain(head)}` : `${computedPlain} is ${expectedText}, not ${claimedPlain}`;
+  return result(link, ctx, 'fails', `${family}.mismatch`, message, related(ec), {
     expected,
     ...(fix ? { fix } : {}),
     caution,

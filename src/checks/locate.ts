@@ -44,7 +44,7 @@ function nodeAt(statement: Statement, offset: number): Expr | undefined {
 export function walkStatementsTo(text: string, language: DocumentLanguage, offset: number, config: CheckerConfig): LocatedMatrix | undefined {
   const { statements } = readStatements(text, language, config);
   const env = new Environment();
-  const ctx: StatementContext = { text, env, config, isCancelled: () => false, plain: (e) => plainText(e, text), definitionsOnly: true };
+  const ctx: StatementContext = { text, env, config, isCancelled: () => false, plain: (e) => plainText(e, text), definitionsOnly: true, state: { previousWasClaim: false } };
   for (const { statement } of statements) {
     if (statement.start > offset) break;
     processStatement(statement, ctx);

@@ -9,7 +9,7 @@ import { parseCommandLine, USAGE, type CheckCommand, type DecomposeCommand } fro
 import { collectNotes } from './files';
 import { applyEdits, writeFileAtomic } from './fix';
 import { buildReport, formatSarif, formatText, type CheckedFile } from './report';
-import { LineIndex } from './lines';
+import { lineIndex, type LineIndex } from '../document/index';
 
 declare const __VERSION__: string | undefined;
 const VERSION = typeof __VERSION__ === 'string' ? __VERSION__ : '0.0.0-dev';
@@ -45,11 +45,11 @@ function runCheck(cmd: CheckCommand, io: Io): number {
       const edits = result.claims.filter((c) => c.verdict === 'fails' && c.fix).map((c) => c.fix!);
       if (edits.length) {
         const { text: fixed, applied } = applyEdits(text, edits);
-        const index = new LineIndex(text);
+        const index = lineIndex(text);
         try {
           writeFileAtomic(note.absolutePath, fixed);
           for (const edit of applied) {
-            const p = index.position(edit.offset);
+            const p = index.positionAt(edit.offset);
             const old = text.slice(edit.offset, edit.offset + edit.length);
             io.err(`${note.displayPath}:${p.line}:${p.column}: fixed: ${old} → ${edit.text}\n`);
           }

@@ -7,7 +7,7 @@ import type { CheckedDocument, TextProblem, VerdictKind } from '../checks/types'
 import { SAFETY_CAUTION } from '../checks/types';
 import { isAbsolute } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { LineIndex } from './lines';
+import { lineIndex, type LineIndex } from '../document/index';
 
 /** One claim as the JSON output shows it. Columns are 1-based; `endColumn` is exclusive. */
 export interface ClaimReport {
@@ -49,11 +49,11 @@ export function buildReport(files: readonly CheckedFile[]): CheckReport {
   const out: FileReport[] = [];
   for (const file of files) {
     if (file.readError) continue;
-    const lines = new LineIndex(file.text);
+    const lines = lineIndex(file.text);
     const claims: ClaimReport[] = file.result.claims.map((claim) => {
       summary[claim.verdict] += 1;
-      const start = lines.position(claim.start);
-      const end = lines.position(claim.end);
+      const start = lines.positionAt(claim.start);
+      const end = lines.positionAt(claim.end);
       const report: ClaimReport = {
         line: start.line,
         column: start.column,
@@ -68,7 +68,7 @@ export function buildReport(files: readonly CheckedFile[]): CheckReport {
     });
     const definitions = file.result.definitions.map((d) => ({
       name: d.name,
-      line: lines.position(d.start).line,
+      line: lines.positionAt(d.start).line,
       rows: d.rows,
       cols: d.cols,
     }));
@@ -86,15 +86,15 @@ export function formatText(files: readonly CheckedFile[], report: CheckReport): 
       lines.push(`${file.path}: error: ${file.readError}`);
       continue;
     }
-    const index = new LineIndex(file.text);
+    const index = lineIndex(file.text);
     const entries: { offset: number; line: string }[] = [];
     for (const claim of file.result.claims) {
-      const p = index.position(claim.start);
+      const p = index.positionAt(claim.start);
       caution ||= claim.caution === true;
       entries.push({ offset: claim.start, line: `${file.path}:${p.line}:${p.column}: ${claim.verdict}: ${claim.message}` });
     }
     for (const problem of file.result.problems) {
-      const p = index.position(problem.start);
+      const p = index.positionAt(problem.start);
       entries.push({ offset: problem.start, line: `${file.path}:${p.line}:${p.column}: problem: ${problem.message} [${problem.code}]` });
     }
     entries.sort((a, b) => a.offset - b.offset);
@@ -150,13 +150,13 @@ export function formatSarif(files: readonly CheckedFile[], version: string): Log
   const results: Result[] = [];
   const ruleIndex = (id: string) => RULES.findIndex((r) => r.id === id);
   const region = (index: LineIndex, start: number, end: number) => {
-    const s = index.position(start);
-    const e = index.position(end);
+    const s = index.positionAt(start);
+    const e = index.positionAt(end);
     return { startLine: s.line, startColumn: s.column, endLine: e.line, endColumn: e.column, charOffset: start, charLength: end - start };
   };
   for (const file of files) {
     if (file.readError) continue;
-    const index = new LineIndex(file.text);
+    const index = lineIndex(file.text);
     const uri = sarifUri(file.path);
     for (const claim of file.result.claims) {
       const ruleId = `claim.${claim.verdict}`;
