@@ -151,3 +151,27 @@ test('rings outside the tower reach the generic kernels: Z[t] polynomials with e
   assert.equal(rank(m), 3);
   assert.equal(charpolyCoefficients(m).length, 4);
 });
+
+test('fraction-free rref equals Gauss–Jordan over Q on seeded rank-deficient rectangular matrices', () => {
+  // Gauss–Jordan over a field is run through a field that is not QQ itself, so the generic kernel
+  // serves as the reference (common practice: the reduced row echelon form is unique).
+  const otherQ = { ...QQ, name: 'Q (generic kernel)' };
+  let seed = 4242;
+  const rand = (k: number) => {
+    seed = (seed * 1103515245 + 12345) % 2147483648;
+    return seed % k;
+  };
+  for (let trial = 0; trial < 40; trial++) {
+    const rows = 1 + rand(7);
+    const cols = 1 + rand(7);
+    const inner = 1 + rand(Math.min(rows, cols));
+    const b = Matrix.build(QQ, rows, inner, () => q(rand(9) - 4, 1 + rand(3)));
+    const c = Matrix.build(QQ, inner, cols, () => q(rand(9) - 4));
+    const m = b.mul(c);
+    const fast = rref(m);
+    const reference = rref(Matrix.fromEntries(otherQ, rows, cols, m.entries));
+    assert.deepEqual(fast.pivots, reference.pivots, `trial ${trial}`);
+    assert.deepEqual(fast.rref.entries.map(String), reference.rref.entries.map(String), `trial ${trial}`);
+    assert.equal(rank(m), fast.pivots.length);
+  }
+});
