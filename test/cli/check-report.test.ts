@@ -8,10 +8,10 @@
  * practice, no source.
  */
 import assert from 'node:assert/strict';
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { after, before, describe, it } from 'node:test';
-import { assertBuilt, lineColumn, offsetOf, runCli, tempFolder } from './helpers';
+import { assertBuilt, lineColumn, offsetOf, ROOT, runCli, tempFolder } from './helpers';
 
 // K = [[3, 1], [2, 4]]: det 10, trace 7, rank 2. M = diag(2, 3, 5): det 30. Q is never defined.
 // Non-ASCII text (é, ü, —) stands before claims on the same line, so columns are tested past it.
@@ -180,6 +180,13 @@ describe('check text format and exit status', () => {
     });
     assert.match(claimLines[1], /^bracket\.md:6:\d+: fails: .*\b7\b/);
     assert.ok(lines.some((l) => /1 note: 3 hold, 2 fail, 1 unchecked/.test(l)), run.stdout);
+  });
+
+  it('prints the package version with --version (the bundle carries it)', () => {
+    const run = runCli(['--version'], dir);
+    assert.equal(run.status, 0);
+    const { version } = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as { version: string };
+    assert.equal(run.stdout.trim(), version);
   });
 
   it('exits 0 when no claim fails', () => {

@@ -220,4 +220,35 @@ describe('language server over stdio (settings pushed by the client)', () => {
     assert.deepEqual(last?.diagnostics, []);
     assert.equal(last?.version, undefined, 'the last notification is the clearing one (versioned ones came before)');
   });
+
+  it('counts positions in UTF-16 code units and keeps CRLF lines apart', async () => {
+    // An emoji (two UTF-16 code units) and accented letters before the claim, CRLF line ends.
+    const text = '$$A = \\begin{pmatrix} 0 & 1 \\\\ -6 & -5 \\end{pmatrix}$$\r\n\r\nSchön 🙂 — $\\det A = 7$\r\n';
+    const uri = 'file:///notes/utf16.md';
+    await session.open(uri, 'markdown', text);
+    const [diagnostic] = await session.diagnosticsFor(uri, 1);
+    const lineText = 'Schön 🙂 — $\\det A = 7$';
+    const start = lineText.indexOf('\\det'); // JavaScript string indices are UTF-16 code units
+    assert.deepEqual(diagnostic.range, { start: { line: 2, character: start }, end: { line: 2, character: start + '\\det A = 7'.length } });
+    assert.deepEqual((diagnostic.data as { replacement: TextEdit }).replacement, {
+      range: { start: { line: 2, character: start + 9 }, end: { line: 2, character: start + 10 } },
+      newText: '6',
+    });
+    await session.close(uri);
+  });
+
+  it('survives malformed notes and requests about unknown documents, and keeps answering', async () => {
+    const uri = 'file:///notes/garbage.tex';
+    const garbage = '\\begin{align} \\det {{{ = \\frac{ \\\\ & & \\end{pmatrix} $ $$ \\[ \u0000\ufffd \\left( \\det A = \n'.repeat(50);
+    await session.open(uri, 'latex', garbage);
+    const diagnostics = await session.diagnosticsFor(uri, 1);
+    assert.ok(Array.isArray(diagnostics));
+    assert.equal(await session.hover('file:///notes/never-opened.md', 0, 0), null);
+    assert.deepEqual(await session.codeLenses('file:///notes/never-opened.md'), []);
+    assert.deepEqual(await session.codeActions('file:///notes/never-opened.md', []), []);
+    const at = positionOf(garbage, garbage.indexOf('\\det A'));
+    await session.hover(uri, at.line, at.character + 5); // answered (null or not), never a crash
+    assert.equal(session.child.exitCode, null, `the server is still running: ${session.stderr.join('')}`);
+    await session.close(uri);
+  });
 });
