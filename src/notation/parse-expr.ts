@@ -21,10 +21,12 @@ export function parseCommaList(c: Cursor): Expr[] {
 /** An expression: direct sums of sums (`\oplus` binds loosest). */
 export function parseExpression(c: Cursor): Expr {
   let left = parseSum(c);
-  while (c.is('\\oplus')) {
-    c.next();
+  while (c.is('\\oplus') || c.is('\\otimes')) {
+    const op = c.next();
     const right = parseSum(c);
-    left = { kind: 'directSum', left, right, operator: '\\oplus', start: left.start, end: right.end };
+    if (op.value === '\\oplus') left = { kind: 'directSum', left, right, operator: '\\oplus', start: left.start, end: right.end };
+    // The Kronecker product is kept (as an `other` apply) so the statement is read, not checked.
+    else left = { kind: 'apply', func: 'other', name: '\\otimes', args: [left, right], subscript: null, nameSuperscript: null, delimiters: null, start: left.start, end: right.end };
   }
   return left;
 }

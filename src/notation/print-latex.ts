@@ -35,7 +35,10 @@ function levelOf(e: Expr): Level {
     case 'fraction':
       return e.form === 'slash' ? Level.Product : Level.Atom;
     case 'apply':
-      return e.delimiters || e.name === 'vmatrix' || e.name.endsWith('|') || isExpPower(e) ? Level.Postfix : Level.Product;
+      if (e.name === '\\otimes') return Level.DirectSum;
+      // `\det(A)`, `|A|`, a vmatrix: closed on the right, so they can take a superscript.
+      if (e.delimiters || e.name === 'vmatrix' || e.name.endsWith('|')) return Level.Atom;
+      return isExpPower(e) ? Level.Postfix : Level.Product;
     case 'power':
     case 'transpose':
     case 'conjugateTranspose':
@@ -164,6 +167,7 @@ class LatexPrinter {
 
   private apply(e: ApplyExpr, forceParens = false): string {
     if (e.name === 'vmatrix') return this.print(e.args[0]!);
+    if (e.name === '\\otimes' && e.args.length === 2) return `${this.print(e.args[0]!, Level.DirectSum)} \\otimes ${this.print(e.args[1]!, Level.Sum)}`;
     if (isExpPower(e)) {
       return `${e.name}^{${this.print(e.args[0] ?? { kind: 'error', start: 0, end: 0 })}}`;
     }

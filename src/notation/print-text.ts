@@ -201,6 +201,7 @@ function apply(e: ApplyExpr): Box {
     const single = arg.lines.length === 1 ? arg.lines[0]! : '';
     return width(single) === 1 ? line(`e^${single}`) : beside(line('e^('), arg, line(')'));
   }
+  if (e.name === '\\otimes' && e.args.length === 2) return beside(printBox(e.args[0]!, 1), line(' ⊗ '), printBox(e.args[1]!, 2));
   let head: string;
   if (e.func === 'charpoly' || e.func === 'minpoly' || e.func === 'jordanBlock') head = plainLetters(e.name);
   else head = functionNames[e.func] ?? plainLetters(e.name);

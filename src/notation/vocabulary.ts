@@ -43,7 +43,9 @@ export const relationCommands: ReadonlyMap<string, RelationKind> = new Map<strin
   ['\\rightarrow', 'other'], ['\\mapsto', 'other'], ['\\Rightarrow', 'other'], ['\\implies', 'other'],
   ['\\iff', 'other'], ['\\Leftrightarrow', 'other'], ['\\simeq', 'other'], ['\\cong', 'other'],
   ['\\propto', 'other'], ['\\ll', 'other'], ['\\gg', 'other'], ['\\perp', 'other'],
-  ['\\longrightarrow', 'other'], ['\\Longrightarrow', 'other'], ['\\iff', 'other'],
+  ['\\longrightarrow', 'other'], ['\\Longrightarrow', 'other'], ['\\succ', 'other'],
+  ['\\succeq', 'other'], ['\\prec', 'other'], ['\\preceq', 'other'], ['\\succcurlyeq', 'other'],
+  ['\\preccurlyeq', 'other'], ['\\neq', 'notEquals'],
   ['\\approxeq', 'other'], ['\\doteq', 'other'], ['\\triangleq', 'defines'], ['\\eqqcolon', 'other'],
 ]);
 

@@ -102,6 +102,7 @@ test('relations of every kind are recognised', () => {
     ['a \\geq b', 'greaterOrEqual'],
     ['\\lambda \\in \\sigma(A)', 'other'],
     ['a ≤ b', 'lessOrEqual'],
+    ['A \\succ 0', 'other'],
   ];
   for (const [source, kind] of cases) {
     const r = split(source);
