@@ -192,6 +192,21 @@ export function wordAfter(c: Cursor, ahead: number): { word: string; length: num
   return word ? { word, length: j - ahead + 1 } : null;
 }
 
+/**
+ * True where an operator's paren-less argument stops: at an operator name, or at `e^{…}` (its
+ * other spelling), so `\cos t\, e^{-t}` is cos(t)·e^{−t}, not cos(t·e^{−t}).
+ */
+export function argumentStopAt(c: Cursor, ahead = 0): boolean {
+  if (operatorAt(c, ahead)) return true;
+  const t = c.peek(ahead);
+  if (t.type === 'letter' && t.value === 'e') return c.is('^', ahead + 1);
+  if (t.type === 'command' && t.value === '\\mathrm') {
+    const w = wordAfter(c, ahead);
+    return w !== null && w.word === 'e' && c.is('^', ahead + w.length);
+  }
+  return false;
+}
+
 /** True when the token at `ahead` starts an operator name (`\det`, `\operatorname{tr}`, …). */
 export function operatorAt(c: Cursor, ahead = 0): boolean {
   const t = c.peek(ahead);

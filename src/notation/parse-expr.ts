@@ -3,7 +3,7 @@
  * operator-without-parentheses rule), unary signs, and postfix scripts (`^`, `'`, `!`, `_`).
  */
 import type { Expr, ProductOperator } from './ast';
-import { Cursor, operatorAt, relationAt } from './cursor';
+import { argumentStopAt, Cursor, relationAt } from './cursor';
 import { parsePrimary, startsPrimary } from './parse-primary';
 import { interpretSuperscript, parseScriptArgument } from './parse-scripts';
 import { canonicalScriptText, symbolKey } from './symbols';
@@ -70,7 +70,7 @@ export function parseProduct(c: Cursor, operatorArgument: boolean): Expr {
     const before = c.pos;
     const t = c.peek();
     if (c.is('\\cdot') || c.is('\\times') || c.is('*') || c.is('\\ast')) {
-      if (operatorArgument && operatorAt(c, 1)) return left;
+      if (operatorArgument && argumentStopAt(c, 1)) return left;
       c.next();
       const right = parseSigned(c, operatorArgument);
       const operator: ProductOperator = t.value === '\\ast' ? '*' : (t.value as ProductOperator);
@@ -79,7 +79,7 @@ export function parseProduct(c: Cursor, operatorArgument: boolean): Expr {
       c.next();
       const right = parsePostfix(c);
       left = { kind: 'fraction', numerator: left, denominator: right, form: 'slash', start: left.start, end: right.end };
-    } else if (startsPrimary(c, 0) && !(operatorArgument && operatorAt(c, 0))) {
+    } else if (startsPrimary(c, 0) && !(operatorArgument && argumentStopAt(c, 0))) {
       const right = parsePostfix(c);
       left = { kind: 'multiply', left, right, operator: 'juxtaposition', start: left.start, end: right.end };
     } else {

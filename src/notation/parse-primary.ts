@@ -31,7 +31,7 @@ export function startsPrimary(c: Cursor, ahead: number): boolean {
     case 'char':
       if (t.value === '(' || t.value === '[' || t.value === '{') return true;
       if (t.value === '|') return c.barsDepth === 0;
-      if (t.value === '.') return c.peek(ahead + 1).type === 'digit' && c.peek(ahead + 1).start === t.end;
+      if (t.value === '.') return c.peek(ahead + 1).type === 'digit';
       return false;
     case 'command':
       if (t.value === '\\lvert' || t.value === '\\vert') return c.barsDepth === 0;
@@ -110,23 +110,26 @@ function primary(c: Cursor): Expr {
   return c.missing('a value');
 }
 
-/** A number: contiguous digits, optionally `.` and more digits (also `.5`). */
+/**
+ * A number: digits, optionally `.` and more digits (also `.5`). As in TeX, spacing between
+ * digits does not separate them (`1\,000` and `1 000` both display, and mean, 1000).
+ */
 export function parseNumber(c: Cursor): Expr {
   const first = c.peek();
   let text = '';
   let end = first.start;
-  while (c.peek().type === 'digit' && (text === '' || c.peek().start === end)) {
+  while (c.peek().type === 'digit') {
     const d = c.next();
     text += d.value;
     end = d.end;
   }
   let decimalPlaces = 0;
   let isDecimal = false;
-  if (c.is('.') && (text === '' || c.peek().start === end) && c.peek(1).type === 'digit' && c.peek(1).start === c.peek().end) {
+  if (c.is('.') && c.peek(1).type === 'digit') {
     end = c.next().end;
     text += '.';
     isDecimal = true;
-    while (c.peek().type === 'digit' && c.peek().start === end) {
+    while (c.peek().type === 'digit') {
       const d = c.next();
       text += d.value;
       end = d.end;

@@ -8,6 +8,7 @@
 import type { ApplyExpr, Delimiters, Expr, FractionExpr, MatrixExpr } from './ast';
 import { formatDecimal, formatMatrixLatex } from './format';
 import type { NotationStyle } from './style';
+import { operatorCommands } from './vocabulary';
 
 /** Binding strength: a child printed in a slot that needs more gets parentheses. */
 const enum Level {
@@ -56,7 +57,8 @@ function levelOf(e: Expr): Level {
 function glue(a: string, b: string): string {
   if (!a || !b) return a + b;
   if (/\\[a-zA-Z]+$/.test(a) && /^[a-zA-Z]/.test(b)) return `${a} ${b}`;
-  if (/[0-9.]$/.test(a) && /^[0-9.]/.test(b)) return `${a} ${b}`;
+  // Spacing does not separate digits in TeX (`2 3` reads 23): brace the second number.
+  if (/[0-9.]$/.test(a) && /^[0-9.]/.test(b)) return `${a}{${b}}`;
   return a + b;
 }
 
@@ -218,7 +220,7 @@ class LatexPrinter {
 function startsWithOperator(e: Expr): boolean {
   let x: Expr = e;
   for (;;) {
-    if (x.kind === 'apply') return x.name.startsWith('\\') && x.func !== 'charpoly' && x.func !== 'minpoly' && x.func !== 'spectrum';
+    if (x.kind === 'apply') return isExpPower(x) || operatorCommands.has(x.name) || /^\\(operatorname|mathrm|text|dim)/.test(x.name);
     if (x.kind === 'multiply' || x.kind === 'add' || x.kind === 'subtract') x = x.left;
     else if (x.kind === 'power' || x.kind === 'factorial') x = x.kind === 'power' ? x.base : x.operand;
     else return false;

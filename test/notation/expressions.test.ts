@@ -123,6 +123,12 @@ const shapes: [string, string][] = [
   ['\\sin 2t \\cos t', 'multiply(sin(multiply(2, t)), cos(t))'],
   ['e^{2t}\\cos 3t', 'multiply(exp(multiply(2, t)), cos(multiply(3, t)))'],
   ['\\det -A', 'det(neg(A))'],
+  ['\\cos t\\, e^{-t}', 'multiply(cos(t), exp(neg(t)))'],
+  ['\\sin \\omega t \\mathrm{e}^{t}', 'multiply(sin(multiply(\\omega, t)), exp(t))'],
+  // spacing never separates digits, as in TeX
+  ['1\\,000', '1000'],
+  ['2 3', '23'],
+  ['1 . 5', '1.5'],
   // matrices, vectors, sets
   ['\\begin{pmatrix} 1 & 2 \\\\ 3 & 4 \\end{pmatrix}', 'pmatrix[1 2; 3 4]'],
   ['\\begin{bmatrix} 1 & 0 \\\\ 0 & 1 \\\\ \\end{bmatrix}', 'bmatrix[1 0; 0 1]'],
@@ -213,6 +219,11 @@ test('function applications cover the name and the argument', () => {
     assert.equal(textOf(source, a), applyText, source);
     assert.deepEqual(a.args.map((x) => textOf(source, x)), argTexts, source);
   }
+});
+
+test('braces group without showing: a braced number next to a number is a product', () => {
+  const e = expr('2{3}');
+  assert.equal(shape(e), 'multiply(2, 3)');
 });
 
 test('names normalise to one key however the subscript is written', () => {
