@@ -3,9 +3,9 @@
  * hover has its own worker lane), and a check made stale by newer edits is cancelled — only the
  * latest version's diagnostics are published, and they do not wait for the stale work.
  *
- * The long note: 60 dense 20×20 integer matrices (pseudo-random entries in −9…9) with the claim
+ * The long note: 100 dense 20×20 integer matrices (pseudo-random entries in −9…9) with the claim
  * (M^{60})^{-1} = I each; with the per-claim time budget raised to 10 minutes, checking it takes
- * about a second of exact work per claim, so a minute or more in all. The waits below use
+ * about a second of exact work per claim, so well over a minute in all. The waits below use
  * deadlines far shorter than that (never assertions on durations): if a stale check were not
  * cancelled, the newer version's diagnostics could not arrive before the deadline.
  */
@@ -22,7 +22,7 @@ function longNote(variant: number): string {
     return (seed % 19) - 9;
   };
   let text = `# Load survey of the gantry frame (revision ${variant})\n\n`;
-  for (let m = 0; m < 60; m++) {
+  for (let m = 0; m < 100; m++) {
     const rows = Array.from({ length: 20 }, () => Array.from({ length: 20 }, entry).join(' & ')).join(' \\\\ ');
     text += `$$M_{${m}} = \\begin{pmatrix} ${rows} \\end{pmatrix}$$\n\nThen $(M_{${m}}^{60})^{-1} = I$.\n\n`;
   }

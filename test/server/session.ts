@@ -37,9 +37,9 @@ import {
   type TextEdit,
 } from 'vscode-languageserver-protocol/node';
 
-/** The repository root and the bundled server. */
+/** The repository root and the bundled server (NOTARY_TEST_SERVER may point elsewhere, e.g. at a deliberately broken copy). */
 export const ROOT = resolve(__dirname, '..', '..');
-export const SERVER = join(ROOT, 'dist', 'server.js');
+export const SERVER = process.env.NOTARY_TEST_SERVER ?? join(ROOT, 'dist', 'server.js');
 
 /** Fails with a clear message when the bundles are missing (`npm test` builds them first). */
 export function assertServerBuilt(): void {

@@ -23,7 +23,7 @@ function run(command: string, args: string[], cwd: string, timeoutMs = 300_000) 
   return result;
 }
 
-describe('npm run package', () => {
+describe('npm run package and npm start in a copy of the working tree', () => {
   let work: string;
   let vsix: string;
   let names: string[];
@@ -94,6 +94,17 @@ describe('npm run package', () => {
     const check = run(process.execPath, [join(work, 'scripts', 'check-vsix.mjs'), tampered], work);
     assert.equal(check.status, 1);
     assert.match(check.stderr, /extension\/src\/cli\/main\.ts/);
+  });
+
+  it('npm start (the README\'s first set-up command) builds and prints the report on examples/', () => {
+    const started = run('npm', ['start', '--silent'], work);
+    const lines = started.stdout.split('\n');
+    const claimLines = lines.filter((l) => /^examples\/[^:]+\.(md|tex):\d+:\d+: (holds|fails|unchecked): \S/.test(l));
+    assert.ok(claimLines.some((l) => l.includes('.md:')) && claimLines.some((l) => l.includes('.tex:')), started.stdout + started.stderr);
+    const summary = lines.find((l) => /^2 notes: \d+ holds?, \d+ fails?, \d+ unchecked$/.test(l));
+    assert.ok(summary, `a summary line: ${started.stdout}`);
+    // The examples hold failing claims on purpose, so the report's status is 1 (SPEC §7).
+    assert.equal(started.status, 1);
   });
 
   it('runs the packaged language server from the unpacked .vsix: it publishes a failing claim', async () => {
