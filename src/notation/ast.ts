@@ -36,7 +36,10 @@ export type RelationKind =
   | 'greaterOrEqual' // \ge, \geq
   | 'other'; // \in, \to, \equiv, \implies, …: recognised so the statement is not misread
 
-/** A relation symbol as written. `text` is the source (e.g. `\coloneqq`). */
+/**
+ * A relation symbol. `text` is its normalised spelling (`=`, `:=`, `\coloneqq`, `\le`; a typed
+ * `≤` gives `\le`); slice the document with `start`/`end` for the exact source.
+ */
 export interface Relation extends Span {
   kind: RelationKind;
   text: string;
@@ -45,7 +48,10 @@ export interface Relation extends Span {
 /** The written form of a decimal or integer literal. The sign is never part of it (see `negate`). */
 export interface NumberLiteral extends Span {
   kind: 'number';
-  /** The digits exactly as written, e.g. `12`, `0.250`. */
+  /**
+   * The digits as written, e.g. `12`, `0.250`, `.5`; spacing inside a number is dropped as TeX
+   * does (`1\,000` → `1000`), and JSON exponents are expanded (`1e3` → `1000`).
+   */
   text: string;
   /** True for a literal with a decimal point. */
   isDecimal: boolean;
