@@ -25,15 +25,32 @@ const maxJsonExponent = 100;
  * Parses one notary-block line. `text` is the line (without its line break) and `start` its
  * absolute offset in the document, so every position in the result is absolute.
  */
-export function parseNotaryLine(text: string, start: number): NotaryLine {
-  const trimmed = text.trim();
+export function parseNotaryLine(line: string, start: number): NotaryLine {
+  const trimmed = line.trim();
   if (trimmed === '') return { kind: 'blank', statements: [], problems: [] };
   if (trimmed.startsWith('#')) return { kind: 'comment', statements: [], problems: [] };
+  // A trailing `# remark` is a comment too (`#` is never math; `\#` and `#` in strings are kept).
+  const text = line.slice(0, commentStart(line));
   const { tokens, problems } = tokenize(text, 0, text.length, shiftMap(start));
   const json = jsonDefinition(text, start, tokens);
   if (json) return json;
   const result = splitTokens(tokens, problems, false);
   return { kind: 'statement', statements: result.statements, problems: result.problems };
+}
+
+/** Index of the `#` that starts a trailing comment (outside JSON strings, not `\#`), or the length. */
+function commentStart(line: string): number {
+  let inString = false;
+  for (let i = 0; i < line.length; i++) {
+    const ch = line[i];
+    if (ch === '\\') {
+      i++;
+      continue;
+    }
+    if (ch === '"') inString = !inString;
+    else if (ch === '#' && !inString) return i;
+  }
+  return line.length;
 }
 
 /** Recognises `name = [[…]]` (also `:=`, `\coloneqq`) and builds its statement. */

@@ -111,3 +111,13 @@ test('a bare JSON matrix (command-line input) parses with offsets from its start
   assert.ok(bad.problems.some((p) => p.code === 'notation.unexpected' && p.start === 9));
   assert.ok(parseJsonMatrix('', 0).problems.length > 0);
 });
+
+test('a trailing # remark is a comment, but not inside strings or after a backslash', () => {
+  const line = 'A = [[4, "\\\\#"], [0, 4]]   # plant matrix, measured';
+  const r = parseNotaryLine(line, 0);
+  assert.equal(r.kind, 'matrix');
+  assert.ok(!r.problems.some((p) => p.code === 'notation.unexpected'), JSON.stringify(r.problems));
+  const latex = parseNotaryLine('\\det A = 16 # from the datasheet', 0);
+  assert.deepEqual(latex.problems, []);
+  assert.equal(textOf('\\det A = 16 # from the datasheet', latex.statements[0]!), '\\det A = 16');
+});
