@@ -22,26 +22,31 @@ const MARKDOWN_TEMPLATE = [
   'Naïve coupling model, measured at the façade test stand 🛠:',
   '$$A = \\begin{pmatrix} 2 & 1 \\\\ 1 & 3 \\end{pmatrix}$$',
   '',
-  'Stale: $\\det A = {{7|5}}$ and ✓ $\\operatorname{tr} A = 5$ and — again — $\\operatorname{tr} A = {{4|5}}$.',
+  'Stale: $\\det A = «7→5»$ and ✓ $\\operatorname{tr} A = 5$ and — again — $\\operatorname{tr} A = «4→5»$.',
   '',
   '```notary',
   'C = [[1, 2], [3, 4]]',
-  '\\det C = {{3|-2}}',
+  '\\det C = «3→-2»',
   '```',
   '',
 ].join('\r\n');
 
-// P = [[1, 2], [3, 4]]: det −2, rank 2. LF line ends, non-ASCII in a comment and in the prose.
+// P = [[1, 2], [3, 4]]: det −2, rank 2; K = [[2, 1], [1, 1]]: det 1, inverse [[1, −1], [−1, 2]]
+// (by hand), the fix keeping bmatrix. LF line ends, non-ASCII in a comment and in the prose.
 const LATEX_TEMPLATE = `\\documentclass{article}
 \\begin{document}
 % Kommentar: Größen in SI — not read
 Ventilatoren-Kopplung:
 \\[ P = \\begin{bmatrix} 1 & 2 \\\\ 3 & 4 \\end{bmatrix} \\]
-Then $\\det P = {{2|-2}}$ and $\\det P = -2$ (été).
+Then $\\det P = «2→-2»$ and $\\det P = -2$ (été).
 \\begin{align}
-  \\operatorname{rank} P &= {{1|2}} \\\\
+  \\operatorname{rank} P &= «1→2» \\\\
   \\operatorname{tr} P &= 5
 \\end{align}
+\\[ K = \\begin{bmatrix} 2 & 1 \\\\ 1 & 1 \\end{bmatrix} \\]
+\\begin{equation}
+  K^{-1} = «\\begin{bmatrix} 1 & 1 \\\\ -1 & 2 \\end{bmatrix}→\\begin{bmatrix} 1 & -1 \\\\ -1 & 2 \\end{bmatrix}»
+\\end{equation}
 \\end{document}
 `;
 
@@ -101,7 +106,7 @@ describe('check --fix killed while it writes', () => {
   // file takes a while and a kill can land in the middle of it.
   const logLine = 'pump-skid log: impeller A 1480 rpm, impeller B 1475 rpm, coupling torque 212 N m, bearing 41 °C\n';
   let template = '$$A = \\begin{pmatrix} 2 & 1 \\\\ 1 & 3 \\end{pmatrix}$$\n\n';
-  for (let i = 0; i < 30; i++) template += `Reading ${i}: $\\det A = {{7|5}}$.\n\n\`\`\`text\n${logLine.repeat(300)}\`\`\`\n\n`;
+  for (let i = 0; i < 30; i++) template += `Reading ${i}: $\\det A = «7→5»$.\n\n\`\`\`text\n${logLine.repeat(300)}\`\`\`\n\n`;
   const note = staleAndFixed(template);
   const oldBytes = Buffer.from(note.before, 'utf8');
   const newBytes = Buffer.from(note.after, 'utf8');

@@ -56,12 +56,12 @@ export function tempFolder(prefix = 'notary-cli-'): { dir: string; remove: () =>
 }
 
 /**
- * A note template in which each stale claimed value is written `{{stale|correct}}`: `before` is
+ * A note template in which each stale claimed value is written `«stale→correct»`: `before` is
  * the note as the user wrote it, `after` the note with only those values corrected.
  */
 export function staleAndFixed(template: string): { before: string; after: string; changes: { stale: string; correct: string }[] } {
   const changes: { stale: string; correct: string }[] = [];
-  const pattern = /\{\{([^|{}]*)\|([^|{}]*)\}\}/g;
+  const pattern = /«([^«»→]*)→([^«»→]*)»/g;
   const before = template.replace(pattern, (_m, stale: string, correct: string) => {
     changes.push({ stale, correct });
     return stale;
