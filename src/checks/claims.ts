@@ -82,7 +82,7 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   if (ctx.definitionsOnly) return undefined;
   const involves = chainIsClaim || involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
   if (!involves && relation !== 'similar') return undefined;
-  return decideClaim(link, ctx);
+  return decideClaim(link, statement, ctx);
 }
 
 function tryDefinition(key: string, nameStart: number, nameEnd: number, link: Link, ctx: StatementContext): ClaimResult | undefined | 'not-a-matrix' {
@@ -95,7 +95,9 @@ function tryDefinition(key: string, nameStart: number, nameEnd: number, link: Li
     if (!(error instanceof Undecidable)) throw error;
     // Only report when the right side looks like a matrix; otherwise it is scalar prose.
     if (!involvesMatrix(link.right, ctx.env)) return 'not-a-matrix';
-    return result(link, ctx, 'unchecked', `definition.unreadable`, `${displayName(key)} could not be read: ${error.message}`, related(ec));
+    const message = `${displayName(key)} could not be read: ${error.message}`;
+    ctx.env.fail(key, { code: error.code === 'unchecked.budget' ? 'unchecked.budget' : 'definition.unreadable', message });
+    return result(link, ctx, 'unchecked', 'definition.unreadable', message, related(ec));
   }
   if (value.kind !== 'matrix') return 'not-a-matrix';
   let environment: MatrixEnvironment | undefined;
@@ -168,9 +170,34 @@ function claimFamily(e: Expr): string {
   return 'matrix';
 }
 
-function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
+/** Capital-letter names with no definition above, outside matrix literals (where they are scalars), in order. */
+function undefinedMatrixNames(link: Link, ctx: StatementContext): { name: string; key: string }[] {
+  const found: { name: string; key: string; start: number }[] = [];
+  for (const side of [link.left, link.right]) {
+    walk(side, (n) => {
+      if (n.kind === 'matrix') return false;
+      if (n.kind === 'symbol' && looksLikeMatrixName(n.base) && !ctx.env.lookup(n.key)) found.push({ name: displayName(n.key), key: n.key, start: n.start });
+    });
+  }
+  found.sort((a, b) => a.start - b.start);
+  return found.filter((f, i) => found.findIndex((g) => g.key === f.key) === i);
+}
+
+function namesPhrase(found: readonly { name: string }[]): string {
+  const names = found.map((f) => f.name);
+  const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+  return `${list} ${names.length === 1 ? 'is' : 'are'} not defined above this claim`;
+}
+
+function decideClaim(link: Link, statement: Statement, ctx: StatementContext): ClaimResult {
   const budget = newBudget(ctx);
   const ec = evalContext(ctx, budget);
+  const missing = undefinedMatrixNames(link, ctx);
+  if (missing.length) {
+    const failed = missing.map((m) => ctx.env.failure(m.key)).find((f) => f !== undefined);
+    if (failed) return result(link, ctx, 'unchecked', failed.code, failed.message, related(ec));
+    return result(link, ctx, 'unchecked', 'unchecked.undefined-name', namesPhrase(missing), related(ec));
+  }
   const caution = involvesExponential(link.left) || involvesExponential(link.right);
   // The claimed value is the side a fix may replace: the right, unless only the left is a literal.
   const rightLiteral = isLiteralValue(link.right, ctx.env);
@@ -193,7 +220,9 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
   if (relation === 'less' || relation === 'greater' || relation === 'lessOrEqual' || relation === 'greaterOrEqual') {
     return decideOrder(link, ctx, computed, claimed, swap, related(ec), caution);
   }
-  const style = styleOf(claimedExpr, ctx.env.lookup(firstMatrixKey(computedExpr) ?? '')?.environment);
+  const baseStyle = styleOf(claimedExpr, ctx.env.lookup(firstMatrixKey(computedExpr) ?? '')?.environment);
+  // An `=` claim's correct value must be exact; an `\approx` claim's is rounded to the written places.
+  const style = relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true };
   const claimedPlaces = entryPlaces(claimedExpr);
   let comparison;
   try {
@@ -234,7 +263,10 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
       { caution },
     );
   }
-  const fixable = isLiteralValue(claimedExpr, ctx.env) && !(computed.kind === 'matrix' && claimed.kind !== 'matrix');
+  // A middle term of a chain is shared by two links: replacing it would break the other one.
+  const links = statement.links;
+  const lastTerm = swap ? links.length === 1 && !statement.continued : links[links.length - 1] === link;
+  const fixable = lastTerm && isLiteralValue(claimedExpr, ctx.env) && !(computed.kind === 'matrix' && claimed.kind !== 'matrix');
   const fix: TextEdit | undefined = fixable ? { offset: claimedExpr.start, length: claimedExpr.end - claimedExpr.start, text: expected } : undefined;
   const message = inChain ? `${computedPlain} ≠ ${claimedPlain} in the chain for ${ctx.plain(head)}` : `${computedPlain} is ${expectedText}, not ${claimedPlain}`;
   return result(link, ctx, 'fails', `${family}.mismatch`, message, related(ec), {
@@ -249,17 +281,8 @@ function decideClaim(link: Link, ctx: StatementContext): ClaimResult {
  * have no definition above, that is almost always the real reason, so it is named instead.
  */
 function uncheckedFor(error: Undecidable, link: Link, ctx: StatementContext, refs: DefinitionRef[], caution: boolean): ClaimResult {
-  const found: { name: string; start: number }[] = [];
-  for (const side of [link.left, link.right]) {
-    walk(side, (n) => {
-      if (n.kind === 'symbol' && looksLikeMatrixName(n.base) && !ctx.env.lookup(n.key)) found.push({ name: displayName(n.key), start: n.start });
-    });
-  }
-  const missing = [...new Set(found.sort((a, b) => a.start - b.start).map((f) => f.name))];
-  if (missing.length && error.code !== 'unchecked.budget') {
-    const names = missing.length === 1 ? missing[0] : `${missing.slice(0, -1).join(', ')} and ${missing[missing.length - 1]}`;
-    return result(link, ctx, 'unchecked', 'unchecked.undefined-name', `${names} ${missing.length === 1 ? 'is' : 'are'} not defined above this claim`, refs, { caution });
-  }
+  const missing = undefinedMatrixNames(link, ctx);
+  if (missing.length && error.code !== 'unchecked.budget') return result(link, ctx, 'unchecked', 'unchecked.undefined-name', namesPhrase(missing), refs, { caution });
   return result(link, ctx, 'unchecked', error.code, error.message, refs, { caution });
 }
 

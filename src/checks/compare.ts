@@ -37,7 +37,14 @@ function asMatrixLike(v: Value, shapeOf: Matrix<Scalar>): Matrix<Scalar> | undef
  * written in the claim (undefined where the claim wrote an exact value).
  */
 export function compareValues(computed: Value, claimed: Value, places: (index: number) => number | undefined): Comparison {
-  if (computed.kind === 'list' || claimed.kind === 'list') return compareLists(computed, claimed);
+  // A 1×1 matrix is its entry (c A b for a row, a matrix and a column).
+  if (computed.kind === 'matrix' && computed.value.rows === 1 && computed.value.cols === 1 && claimed.kind === 'scalar') {
+    computed = { kind: 'scalar', value: computed.value.get(0, 0) };
+  }
+  if (claimed.kind === 'matrix' && claimed.value.rows === 1 && claimed.value.cols === 1 && computed.kind === 'scalar') {
+    claimed = { kind: 'scalar', value: claimed.value.get(0, 0) };
+  }
+  if (computed.kind === 'list' || claimed.kind === 'list') return compareLists(computed, claimed, places(0));
   if (computed.kind === 'scalar' && claimed.kind === 'scalar') {
     if (scalarsEqual(computed.value, claimed.value)) return { equal: true, withinWrittenPrecision: false };
     const p = places(0);
@@ -63,30 +70,47 @@ export function compareValues(computed: Value, claimed: Value, places: (index: n
   return { equal, withinWrittenPrecision: !equal && within };
 }
 
-function compareLists(computed: Value, claimed: Value): Comparison {
+/** Whether each written value can be paired with its own actual value (a perfect matching). */
+function matchAll(written: readonly Scalar[], actual: readonly Scalar[], same: (w: Scalar, a: Scalar) => boolean): boolean {
+  const used = new Array<boolean>(actual.length).fill(false);
+  const match = (i: number): boolean => {
+    if (i === written.length) return true;
+    for (let j = 0; j < actual.length; j++) {
+      if (used[j] || !same(written[i], actual[j])) continue;
+      used[j] = true;
+      if (match(i + 1)) return true;
+      used[j] = false;
+    }
+    return false;
+  };
+  return match(0);
+}
+
+function compareLists(computed: Value, claimed: Value, places: number | undefined): Comparison {
   if (computed.kind !== 'list' || claimed.kind !== 'list') {
     throw new Undecidable('unchecked.unsupported', 'an eigenvalue list can only be compared with a list');
   }
   const actual = computed.elements;
   const written = claimed.elements;
-  const distinct = (xs: readonly Scalar[]) => xs.filter((x, i) => xs.findIndex((y) => scalarsEqual(x, y)) === i);
+  const exactlySame = (w: Scalar, a: Scalar) => scalarsEqual(a, w);
+  const roughlySame = (w: Scalar, a: Scalar) => scalarsEqual(a, w) || (places !== undefined && roundsTo(a, w, places));
+  const decide = (xs: readonly Scalar[], ys: readonly Scalar[]) => {
+    if (matchAll(xs, ys, exactlySame)) return { equal: true, within: false };
+    return { equal: false, within: places !== undefined && matchAll(xs, ys, roughlySame) };
+  };
   if (written.length === actual.length) {
-    // A multiset: every value with the same multiplicity.
-    const remaining = [...actual];
-    for (const w of written) {
-      const k = remaining.findIndex((x) => scalarsEqual(x, w));
-      if (k < 0) return { equal: false, withinWrittenPrecision: false, listForm: 'multiset' };
-      remaining.splice(k, 1);
-    }
-    return { equal: true, withinWrittenPrecision: false, listForm: 'multiset' };
+    // A multiset: every value with its algebraic multiplicity.
+    const d = decide(written, actual);
+    return { equal: d.equal, withinWrittenPrecision: d.within, listForm: 'multiset' };
   }
-  const writtenDistinct = distinct(written);
+  const writtenDistinct = distinctScalars(written);
+  const actualDistinct = distinctScalars(actual);
   if (writtenDistinct.length === written.length && written.length < actual.length) {
-    const actualDistinct = distinct(actual);
-    const equal = actualDistinct.length === written.length && written.every((w) => actualDistinct.some((x) => scalarsEqual(x, w)));
-    return { equal, withinWrittenPrecision: false, listForm: 'set' };
+    if (written.length !== actualDistinct.length) return { equal: false, withinWrittenPrecision: false, listForm: 'set' };
+    const d = decide(written, actualDistinct);
+    return { equal: d.equal, withinWrittenPrecision: d.within, listForm: 'set' };
   }
-  return { equal: false, withinWrittenPrecision: false, listForm: written.length > actual.length ? 'multiset' : 'multiset' };
+  return { equal: false, withinWrittenPrecision: false, listForm: 'multiset' };
 }
 
 /** Distinct elements of a list, in order. */

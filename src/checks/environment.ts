@@ -25,6 +25,17 @@ export interface Definition {
 export class Environment {
   private readonly byKey = new Map<string, Definition>();
   private readonly all: Definition[] = [];
+  private readonly failures = new Map<string, { code: string; message: string }>();
+
+  /** Remembers that the definition of a name (by key) could not be read, and why. */
+  fail(key: string, reason: { code: string; message: string }): void {
+    this.failures.set(key, reason);
+  }
+
+  /** Why the definition of a name (by key) could not be read, if it was written but not read. */
+  failure(key: string): { code: string; message: string } | undefined {
+    return this.failures.get(key);
+  }
 
   /** The latest definition of a name, if any. */
   lookup(key: string): Definition | undefined {
@@ -33,6 +44,7 @@ export class Environment {
 
   /** Binds (or rebinds) a name. */
   define(definition: Definition): void {
+    this.failures.delete(definition.key);
     this.byKey.set(definition.key, definition);
     this.all.push(definition);
   }

@@ -126,7 +126,7 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
     case 'multiply':
       return ops.multiply(evaluate(expr.left, ctx), evaluate(expr.right, ctx), ctx.budget);
     case 'directSum':
-      return ops.directSum(evaluateMatrix(expr.left, ctx, '⊕'), evaluateMatrix(expr.right, ctx, '⊕'));
+      return ops.directSum(blockOf(expr.left, ctx), blockOf(expr.right, ctx));
     case 'power': {
       const base = evaluate(expr.base, ctx);
       const k = integerOf(evaluateScalar(expr.exponent, ctx), 'the exponent');
@@ -197,6 +197,14 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
     case 'error':
       throw new Undecidable('unchecked.unreadable', 'part of this statement could not be read');
   }
+}
+
+/** An operand of ⊕: a matrix, or a number as a 1×1 block. */
+function blockOf(expr: Expr, ctx: EvalContext): Matrix<Scalar> {
+  const v = evaluate(expr, ctx);
+  if (v.kind === 'matrix') return v.value;
+  if (v.kind === 'scalar') return Matrix.fromEntries(SCALAR, 1, 1, [v.value]);
+  throw new Undecidable('unchecked.not-a-matrix', '⊕ needs matrices or numbers');
 }
 
 /** A matrix literal's entries as scalars, with the size budget enforced. */

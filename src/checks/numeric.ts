@@ -42,11 +42,13 @@ export function isRealScalar(s: Scalar): boolean {
 
 /** |exact − written| ≤ half a unit in the written last place, decided with proof. */
 export function roundsTo(exact: Scalar, written: Scalar, places: number): boolean {
+  if (written.k === 'num' && !(written.v instanceof Rational) && !written.v.isReal()) return complexRoundsTo(exact, written, places);
   const d = asRational(written);
   if (!d) throw new Undecidable('unchecked.unsupported', 'the written value is not a decimal number');
   const x = asRational(exact);
   const half = Rational.of(1n, 2n * 10n ** BigInt(places));
-  if (x) return x.sub(d).abs().compare(half) <= 0;
+  // A rational is rounded half away from zero, so a tie (0.015 to two places) goes one way only.
+  if (x) return roundHalfAway(x, places).equals(d);
   if (!isRealScalar(exact)) return false;
   const lowBound = d.sub(half);
   const highBound = d.add(half);
@@ -56,6 +58,30 @@ export function roundsTo(exact: Scalar, written: Scalar, places: number): boolea
     if (hi.compare(lowBound) < 0 || lo.compare(highBound) > 0) return false;
   }
   throw new Undecidable('unchecked.budget', 'the value lies too close to a rounding boundary to decide');
+}
+
+/** x rounded to `places` decimals, half away from zero, as a rational. */
+export function roundHalfAway(x: Rational, places: number): Rational {
+  const scale = 10n ** BigInt(places);
+  const n = x.num < 0n ? -x.num : x.num;
+  const scaled = (2n * n * scale + x.den) / (2n * x.den);
+  return Rational.of(x.num < 0n ? -scaled : scaled, scale);
+}
+
+/** A complex exact value against a written complex decimal a + bi: both parts must round. */
+function complexRoundsTo(exact: Scalar, written: Scalar, places: number): boolean {
+  if (exact.k !== 'num' || written.k !== 'num') return false;
+  const e = exact.v instanceof Rational ? AlgebraicNumber.fromRational(exact.v) : exact.v;
+  const w = written.v instanceof Rational ? AlgebraicNumber.fromRational(written.v) : written.v;
+  const wr = w.re().toRational();
+  const wi = w.im().toRational();
+  if (!wr || !wi) return false;
+  const er = e.re();
+  const ei = e.im();
+  return (
+    roundsTo({ k: 'num', v: er.toRational() ?? er }, { k: 'num', v: wr }, places) &&
+    roundsTo({ k: 'num', v: ei.toRational() ?? ei }, { k: 'num', v: wi }, places)
+  );
 }
 
 /** The real value rounded to `places` decimals, as a rational (for printing expected values). */

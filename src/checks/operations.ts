@@ -3,7 +3,7 @@
  * use. Rational matrices take the engine's fast exact routes; others run the generic kernels over
  * the scalar field.
  */
-import { AlgebraicNumber, Budget, determinant as engineDeterminant, Matrix, QParams, QQ, rank as engineRank, inverse as engineInverse, parameterInverse, Rational, RationalFunction, directSum as engineDirectSum } from '../engine/index';
+import { AlgebraicNumber, Budget, charpolyBerkowitz, determinant as engineDeterminant, Matrix, QParams, QQ, rank as engineRank, inverse as engineInverse, parameterInverse, Rational, RationalFunction, directSum as engineDirectSum } from '../engine/index';
 import { asRational, conjugateScalar, fromSymbolic, num, powScalar, SCALAR, type Scalar } from './scalar';
 import { scalarValue, shapeText, Undecidable, type Value } from './values';
 
@@ -162,6 +162,11 @@ export function determinant(m: Matrix<Scalar>, budget: Budget): Scalar {
   if (r) return num(engineDeterminant(r, budget));
   const p = toParameterMatrix(m);
   if (p) return fromSymbolic(engineDeterminant(p, budget));
+  if (m.entries.some((e) => e.k === 'exp')) {
+    // Division-free (Berkowitz): exponential polynomials cannot in general be divided.
+    const c = charpolyBerkowitz(m, budget);
+    return m.rows % 2 === 0 ? c[0] : SCALAR.neg(c[0]);
+  }
   return engineDeterminant(m, budget);
 }
 
@@ -171,10 +176,14 @@ export function trace(m: Matrix<Scalar>): Scalar {
   return m.trace();
 }
 
-/** The rank. */
+/** The rank; undecidable with free parameters, where it depends on their values. */
 export function rankOf(m: Matrix<Scalar>, budget: Budget): number {
   const r = toRationalMatrix(m);
-  return r ? engineRank(r, budget) : engineRank(m, budget);
+  if (r) return engineRank(r, budget);
+  if (m.entries.some((e) => e.k !== 'num')) {
+    throw new Undecidable('unchecked.free-parameters', 'the rank of a matrix with free parameters or functions of t depends on their values');
+  }
+  return engineRank(m, budget);
 }
 
 /** Complex conjugation of a scalar (real parameters and real t assumed). */

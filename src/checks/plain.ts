@@ -67,14 +67,22 @@ function rewriteCommand(s: string, pattern: RegExp, arity: 1 | 2, render: (args:
 export function softenLatex(latex: string): string {
   let s = latex.replace(/\s+/g, ' ').trim();
   s = s.replace(/\\begin\{[a-zA-Z]*matrix\}(.*?)\\end\{[a-zA-Z]*matrix\}/g, (_m, body: string) => `[${body.split('\\\\').map((r) => r.split('&').map((x) => x.trim()).join(', ')).join('; ')}]`);
-  s = s.replace(/\\(?:operatorname|mathrm|text|mathsf|mathbf|mathit)\s*\{([^{}]*)\}/g, '$1');
+  s = s.replace(/\\(?:operatorname|mathrm|text|mathsf|mathbf|mathit)\s*\{([^{}]*)\}(\s*)(?=(.?))/g, (_m, word: string, space: string, next: string) =>
+    word + (space || (/^[A-Za-z]{2,}$/.test(word) && /[\p{L}\p{N}\\]/u.test(next)) ? ' ' : ''),
+  );
   s = s.replace(/\\(?:left|right|big|Big|bigl|bigr|Bigl|Bigr)\b/g, '');
   s = s.replace(/\\[,;:!]/g, ' ');
   s = rewriteCommand(s, /\\sqrt/g, 1, ([a]) => (simple(a) ? `√${a}` : `√(${a})`));
   s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}`);
+  s = s.replace(/\\approx/g, '≈').replace(/\\l?dots|\\cdots/g, '…').replace(/\\neq?\b/g, '≠').replace(/\\sim\b/g, '∼');
   s = s.replace(/\\cdot/g, '·').replace(/\\times/g, '×').replace(/\\pm/g, '±').replace(/\\mp/g, '∓').replace(/\\oplus/g, '⊕').replace(/\\top\b/g, 'T');
   s = s.replace(/\\\{/g, '{').replace(/\\\}/g, '}');
-  s = s.replace(/\\([a-zA-Z]+)/g, (m, name: string) => GREEK[name] ?? name);
+  // A command name runs into what follows (\det\Phi, \operatorname{tr}A): keep them apart.
+  s = s.replace(/\\([a-zA-Z]+)(\s*)/g, (_m, name: string, space: string, at: number, whole: string) => {
+    const word = GREEK[name] ?? name;
+    const next = whole[at + _m.length] ?? '';
+    return word + (space || (GREEK[name] === undefined && /[\p{L}\p{N}\\]/u.test(next)) ? ' ' : '');
+  });
   s = s.replace(/\^\{([^{}]*)\}/g, (_m, e: string) => (/^[\p{L}\p{N}]+$/u.test(e) ? `^${e}` : `^(${e})`)).replace(/_\{([^{}]*)\}/g, '_$1');
   return s.replace(/\s+/g, ' ').replace(/\(\s+/g, '(').replace(/\s+\)/g, ')').trim();
 }

@@ -17,6 +17,11 @@ export interface NumberStyle {
   readonly fraction: 'frac' | 'dfrac' | 'tfrac' | 'slash';
   /** Decimals with this many places (rounded half away from zero), when set. */
   readonly decimalPlaces?: number;
+  /**
+   * With `decimalPlaces`: print the exact value instead of a rounded one (a terminating decimal in
+   * full, otherwise the exact form) — for `=` claims, whose correct value must be exact.
+   */
+  readonly decimalExact?: boolean;
 }
 
 /** A rational rounded to `places` decimals, half away from zero, as text ("-0.33"). */
@@ -45,6 +50,18 @@ export function exactDecimal(r: Rational, maxPlaces = 30): string | undefined {
   if (d !== 1n) return undefined;
   const places = Math.max(twos, fives);
   return places > maxPlaces ? undefined : roundedDecimal(r, places);
+}
+
+/** a + bi with both parts rounded to `places` decimals (certified enclosures, rounded midpoints). */
+function complexDecimal(a: AlgebraicNumber, places: number, flavour: Flavour): string {
+  const re = normaliseNum(a.re());
+  const im = normaliseNum(a.im());
+  const part = (x: Num) => roundedDecimal(roundedValue({ k: 'num', v: x }, places), places);
+  const r = part(re);
+  const i = part(im);
+  const unit = flavour === 'latex' ? 'i' : 'i';
+  if (/^-?0(\.0*)?$/.test(r)) return `${i}${unit}`;
+  return i.startsWith('-') ? `${r} - ${i.slice(1)}${unit}` : `${r} + ${i}${unit}`;
 }
 
 /** A number in the given flavour and style. */
@@ -181,8 +198,12 @@ export function formatExp(e: ExpPolynomial<Num>, t: string | null, flavour: Flav
     addTrig(sinTerms, 'sin');
     const inner = linearCombination(trig, flavour, style);
     const factor = expFactor(a, t, flavour, style);
+    const sep = flavour === 'latex' ? ' ' : '·';
     if (factor === '') pieces.push({ text: inner, negative: false });
-    else pieces.push({ text: trig.length === 1 && !inner.includes(' + ') && !inner.slice(1).includes(' - ') ? `${factor}${flavour === 'latex' ? ' ' : '·'}${inner}` : `${factor}${flavour === 'latex' ? '' : '·'}(${inner})`, negative: false });
+    else if (trig.length === 1 && !inner.includes(' + ') && !inner.slice(1).includes(' - ')) {
+      // A leading minus goes in front of the whole product: -\frac{13}{3} e^{-2t} \sin 3t, never e^{-2t} -\frac{13}{3} …
+      pieces.push({ text: inner.startsWith('-') ? `-${factor}${sep}${inner.slice(1)}` : `${factor}${sep}${inner}`, negative: false });
+    } else pieces.push({ text: `${factor}${flavour === 'latex' ? '' : '·'}(${inner})`, negative: false });
   });
   if (pieces.length === 0) return '0';
   return pieces.map((p, i) => (i === 0 ? p.text : p.text.startsWith('-') ? ` - ${p.text.slice(1)}` : ` + ${p.text}`)).join('');
@@ -199,8 +220,14 @@ export function formatUnivariate(p: Poly, variable: string, flavour: Flavour): s
 
 /** A scalar in the given flavour. */
 export function formatScalar(s: Scalar, flavour: Flavour, style: NumberStyle): string {
-  if (style.decimalPlaces !== undefined && (s.k === 'num' || (s.k === 'exp' && s.t === null)) && isRealScalar(s)) {
-    return roundedDecimal(roundedValue(s, style.decimalPlaces), style.decimalPlaces);
+  if (style.decimalPlaces !== undefined && style.decimalExact) {
+    const exact = s.k === 'num' && s.v instanceof Rational ? exactDecimal(s.v, 40) : undefined;
+    if (exact !== undefined) return exact;
+    return formatScalar(s, flavour, { fraction: style.fraction });
+  }
+  if (style.decimalPlaces !== undefined && (s.k === 'num' || (s.k === 'exp' && s.t === null))) {
+    if (isRealScalar(s)) return roundedDecimal(roundedValue(s, style.decimalPlaces), style.decimalPlaces);
+    if (s.k === 'num' && s.v instanceof AlgebraicNumber) return complexDecimal(s.v, style.decimalPlaces, flavour);
   }
   if (flavour === 'text' && s.k !== 'num') return softenLatex(formatScalar(s, 'latex', style));
   if (s.k === 'num') return formatNum(s.v, flavour, style);

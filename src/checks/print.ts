@@ -16,6 +16,8 @@ export interface PrintStyle {
   readonly environment: MatrixEnvironment;
   /** When set, rationals print as decimals with this many places (rounded half away from zero). */
   readonly decimalPlaces?: number;
+  /** With decimalPlaces: print exact values (a terminating decimal in full, else the exact form). */
+  readonly decimalExact?: boolean;
   /** `\frac{p}{q}` (default), `\dfrac`, `\tfrac`, or `p/q`. */
   readonly fraction: 'frac' | 'dfrac' | 'tfrac' | 'slash';
 }

@@ -37,11 +37,26 @@ function fromRationalFunction(f: RationalFunction): Scalar {
   return { k: 'sym', v: f };
 }
 
+/**
+ * The canonical scalar for an exponential polynomial: a number when it is constant, a polynomial
+ * in t (kind `sym`) when every rate is 0 and every coefficient rational (e^{Nt} of a nilpotent N),
+ * so equal values always have equal representations.
+ */
 function fromExp(v: ExpPolynomial<Num>, t: string | null): Scalar {
   const terms = v.terms;
   if (terms.length === 0) return num(Rational.ZERO);
   if (terms.length === 1 && terms[0].power === 0 && NUM.isZero(terms[0].rate)) return num(terms[0].coef);
+  if (t !== null && terms.every((x) => NUM.isZero(x.rate) && x.coef instanceof Rational)) {
+    let p = MPoly.ZERO;
+    for (const x of terms) p = p.add(MPoly.variable(t).pow(x.power).scale(x.coef as Rational));
+    return fromRationalFunction(RationalFunction.fromPolynomial(p));
+  }
   return { k: 'exp', v, t };
+}
+
+/** Builds the canonical scalar of an exponential polynomial (see {@link fromExp}). */
+export function expPolynomialScalar(v: ExpPolynomial<Num>, t: string | null): Scalar {
+  return fromExp(v, t);
 }
 
 /** The rational value of a scalar, when it is one. */

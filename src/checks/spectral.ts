@@ -20,7 +20,7 @@ import {
 } from '../engine/index';
 import { NUM, normalise, type Num } from './number';
 import { toParameterMatrix, toRationalMatrix, multiply, add } from './operations';
-import { asRational, expScalar, fromSymbolic, num, SCALAR, symbol, type Scalar } from './scalar';
+import { asRational, expPolynomialScalar, expScalar, fromSymbolic, num, SCALAR, symbol, type Scalar } from './scalar';
 import { shapeText, Undecidable, type Value } from './values';
 
 /** Largest degree of an irreducible factor whose roots are expanded one by one for exponentials. */
@@ -199,7 +199,7 @@ export function exponentialMatrix(a: Matrix<Rational>, t: string | null, budget:
     const only = e.terms.length === 1 ? e.terms[0] : undefined;
     if (e.terms.length === 0) return SCALAR.zero;
     if (only && only.power === 0 && NUM.isZero(only.rate)) return num(only.coef);
-    return { k: 'exp', v: e, t } as Scalar;
+    return expPolynomialScalar(e, t);
   });
   return Matrix.fromEntries(SCALAR, n, n, entries);
 }
