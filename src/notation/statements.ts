@@ -74,6 +74,21 @@ interface Segment {
   tokens: Token[];
 }
 
+/** Length of a `[4pt]`-style spacing argument after a line break at `k`, or 0. */
+function lineSpacingLength(tokens: readonly Token[], k: number): number {
+  if (tokens[k]?.type !== 'char' || tokens[k]!.value !== '[') return 0;
+  let digits = false;
+  let letters = false;
+  for (let j = k + 1; j < k + 12 && j < tokens.length; j++) {
+    const t = tokens[j]!;
+    if (t.type === 'char' && t.value === ']') return digits && letters ? j - k + 1 : 0;
+    if (t.type === 'digit') digits = true;
+    else if (t.type === 'letter') letters = true;
+    else if (!(t.type === 'char' && (t.value === '.' || t.value === '-'))) return 0;
+  }
+  return 0;
+}
+
 /** Splits at line breaks, quads, prose text and column `&`s. */
 function splitSegments(tokens: readonly Token[], align: boolean): Segment[] {
   const segments: Segment[] = [];
@@ -84,13 +99,15 @@ function splitSegments(tokens: readonly Token[], align: boolean): Segment[] {
     if (current.length) segments.push({ tokens: current });
     current = [];
   };
-  for (const t of tokens) {
+  for (let k = 0; k < tokens.length; k++) {
+    const t = tokens[k]!;
     if (t.type === 'eof') break;
     if (depth.hard === 0) {
       if (t.type === 'command' && lineBreaks.has(t.value)) {
         close();
         depth.soft = 0;
         ampersands = 0;
+        k += lineSpacingLength(tokens, k + 1);
         continue;
       }
       if (depth.soft === 0 && ((t.type === 'command' && separatorCommands.has(t.value)) || (t.type === 'text' && !isOperatorText(t)))) {

@@ -42,6 +42,8 @@ const splitting: [string, string[], ('inline' | 'display' | 'align')?][] = [
   ['A &= B & C &= D', ['A &= B', 'C &= D'], 'align'],
   ['\\begin{aligned} A &= B \\\\ &= C \\end{aligned}', ['A &= B', '= C']],
   ['A &=& B \\\\ &=& C', ['A &=& B', '=& C'], 'align'],
+  ['A &= B \\\\[4pt] &= C', ['A &= B', '= C'], 'align'],
+  ['A &= B \\\\ [C, D] &= 0', ['A &= B', '[C, D] &= 0'], 'align'],
   ['A &= B && C &= D', ['A &= B', 'C &= D'], 'align'],
   ['\\det A &= 2 \\cdot 8 \\nonumber \\\\ &= 16 \\label{x}', ['\\det A &= 2 \\cdot 8', '= 16'], 'align'],
 ];
