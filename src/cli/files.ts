@@ -3,7 +3,7 @@
  * `.tex` files, honouring `.gitignore` files with git's meaning — those inside the folder and those
  * above it up to the repository root — and never entering `.git` or `node_modules`.
  */
-import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { existsSync, lstatSync, readdirSync, readFileSync, realpathSync, statSync } from 'node:fs';
 import { dirname, extname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import ignore, { type Ignore } from 'ignore';
 import type { DocumentLanguage } from '../checks/types';
@@ -90,18 +90,32 @@ function ancestorLayers(dir: string, cwd: string): IgnoreLayer[] {
 export function collectNotes(paths: readonly string[], cwd: string): { notes: NoteFile[]; errors: string[] } {
   const notes: NoteFile[] = [];
   const errors: string[] = [];
+  // Keyed by real path, so a note or folder reached again through a symbolic link (or a link
+  // loop) is read once.
   const seen = new Set<string>();
+  const visited = new Set<string>();
+  const realOf = (path: string) => {
+    try {
+      return realpathSync(path);
+    } catch {
+      return path;
+    }
+  };
   const display = (abs: string) => {
     const rel = relative(cwd, abs);
     return rel && !rel.startsWith('..') ? rel.split(sep).join('/') : abs;
   };
   const add = (abs: string) => {
     const language = languageOf(abs);
-    if (!language || seen.has(abs)) return;
-    seen.add(abs);
+    const real = realOf(abs);
+    if (!language || seen.has(real)) return;
+    seen.add(real);
     notes.push({ displayPath: display(abs), absolutePath: abs, language });
   };
   const walk = (dir: string, layers: readonly IgnoreLayer[]) => {
+    const real = realOf(dir);
+    if (visited.has(real)) return;
+    visited.add(real);
     const own = loadIgnore(dir);
     const active = own ? [...layers, own] : layers;
     let names: string[];
@@ -111,7 +125,17 @@ export function collectNotes(paths: readonly string[], cwd: string): { notes: No
       errors.push(`${display(dir)}: cannot read folder (${(error as NodeJS.ErrnoException).code ?? 'error'})`);
       return;
     }
-    for (const name of names) {
+    // Entries that are symbolic links come after the real ones, so a note reached both ways is
+    // reported under its own name.
+    const isLink = (name: string) => {
+      try {
+        return lstatSync(join(dir, name)).isSymbolicLink();
+      } catch {
+        return false;
+      }
+    };
+    const ordered = [...names.filter((n) => !isLink(n)), ...names.filter(isLink)];
+    for (const name of ordered) {
       if (name === '.git' || name === 'node_modules') continue;
       const abs = join(dir, name);
       let stats;

@@ -5,7 +5,7 @@
  * or `node_modules`. The gitignore semantics are git's documented ones (gitignore(5)).
  */
 import assert from 'node:assert/strict';
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { after, before, describe, it } from 'node:test';
 import { assertBuilt, runCli, tempFolder } from './helpers';
@@ -46,6 +46,9 @@ describe('check walks folders for notes', () => {
       mkdirSync(join(dir, dirname(path)), { recursive: true });
       writeFileSync(join(dir, path), text);
     }
+    // A link loop (sub/deeper/up → ..) and a second name for a note: each note is read once.
+    symlinkSync('..', join(dir, 'sub/deeper/up'), 'dir');
+    symlinkSync('c.md', join(dir, 'sub/c-again.md'));
   });
   after(() => remove());
 
@@ -57,7 +60,7 @@ describe('check walks folders for notes', () => {
     return report.files.map((f) => f.path).sort();
   }
 
-  it('finds .md and .tex notes at every depth and honours nested .gitignore files', () => {
+  it('finds .md and .tex notes at every depth and honours nested .gitignore files, each note once despite links', () => {
     assert.deepEqual(walkedPaths(['.']), WALKED);
   });
 
@@ -71,5 +74,9 @@ describe('check walks folders for notes', () => {
 
   it('checks each note once when a folder and a file inside it are both named', () => {
     assert.deepEqual(walkedPaths(['sub', 'sub/c.md']), WALKED.filter((p) => p.startsWith('sub/')));
+  });
+
+  it('checks a note named explicitly even when .gitignore would skip it in a walk', () => {
+    assert.deepEqual(walkedPaths(['drafts/x.md', 'c.draft.md']), ['c.draft.md', 'drafts/x.md']);
   });
 });
