@@ -9,7 +9,7 @@ import { parseCommandLine, USAGE, type CheckCommand, type DecomposeCommand } fro
 import { collectNotes } from './files';
 import { applyEdits, writeFileAtomic } from './fix';
 import { buildReport, formatSarif, formatText, type CheckedFile } from './report';
-import { lineIndex, type LineIndex } from '../document/index';
+import { lineIndex } from '../document/index';
 
 declare const __VERSION__: string | undefined;
 const VERSION = typeof __VERSION__ === 'string' ? __VERSION__ : '0.0.0-dev';
