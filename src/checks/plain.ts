@@ -83,7 +83,7 @@ export function softenLatex(latex: string): string {
     const next = whole[at + _m.length] ?? '';
     return word + (space || (GREEK[name] === undefined && /[\p{L}\p{N}\\]/u.test(next)) ? ' ' : '');
   });
-  s = s.replace(/\^\{([^{}]*)\}/g, (_m, e: string) => (/^[\p{L}\p{N}]+$/u.test(e) ? `^${e}` : `^(${e})`)).replace(/_\{([^{}]*)\}/g, '_$1');
+  s = s.replace(/\^\{([^{}]*)\}/g, (_m, e: string) => (/^(\p{L}|\p{N}+)$/u.test(e) ? `^${e}` : `^(${e})`)).replace(/_\{([^{}]*)\}/g, '_$1');
   return s.replace(/\s+/g, ' ').replace(/\(\s+/g, '(').replace(/\s+\)/g, ')').trim();
 }
 

@@ -232,6 +232,7 @@ export function formatScalar(s: Scalar, flavour: Flavour, style: NumberStyle): s
   if (flavour === 'text' && s.k !== 'num') return softenLatex(formatScalar(s, 'latex', style));
   if (s.k === 'num') return formatNum(s.v, flavour, style);
   if (s.k === 'exp') return formatExp(s.v, s.t === null ? null : s.t, flavour, style);
+  if (s.k === 'lin') return rateTimes(s.c, s.t, flavour, style);
   const vars = s.v.variables();
   if (vars.length === 1 && s.v.isPolynomial()) {
     const p = s.v.num.toUnivariate(vars[0]);

@@ -15,7 +15,9 @@ export type Scalar =
   | { readonly k: 'num'; readonly v: Num }
   | { readonly k: 'sym'; readonly v: RationalFunction }
   /** `t` is the variable's key, or null for constants Σ c·e^{λ}. */
-  | { readonly k: 'exp'; readonly v: ExpPolynomial<Num>; readonly t: string | null };
+  | { readonly k: 'exp'; readonly v: ExpPolynomial<Num>; readonly t: string | null }
+  /** c·t with an irrational or complex c (as in \cos\sqrt{3}t or e^{(-2 + \sqrt{2})t}). */
+  | { readonly k: 'lin'; readonly c: Num; readonly t: string };
 
 /** Wraps an exact number. */
 export function num(v: Num): Scalar {
@@ -71,6 +73,7 @@ export function asNumber(s: Scalar): Num | undefined {
 
 function toRationalFunction(s: Scalar): RationalFunction {
   if (s.k === 'sym') return s.v;
+  if (s.k === 'lin') throw new DomainError('an irrational multiple of a variable is supported only inside e^{…}, cos, sin, cosh, sinh');
   if (s.k === 'num') {
     if (isAlgebraic(s.v)) throw new DomainError('free symbols combined with irrational or complex numbers are not supported yet');
     return RationalFunction.constant(s.v);
@@ -84,6 +87,7 @@ function toExp(s: Scalar, t: string | null): ExpPolynomial<Num> {
     return s.v;
   }
   if (s.k === 'num') return ExpPolynomial.constant(NUM, s.v);
+  if (s.k === 'lin') throw new DomainError('an irrational multiple of a variable is supported only inside e^{…}, cos, sin, cosh, sinh');
   // A polynomial in the exponential's own variable: Σ c t^k.
   if (t === null) throw new DomainError('a free parameter combined with e^{…} of a number is not supported');
   const f = s.v;
@@ -102,6 +106,37 @@ function toExp(s: Scalar, t: string | null): ExpPolynomial<Num> {
   return ExpPolynomial.fromTerms(NUM, terms);
 }
 
+/** c·t as a scalar: a rational c gives the polynomial c·t, any other c the kind `lin`. */
+function linear(c: Num, t: string): Scalar {
+  if (c instanceof Rational) return fromRationalFunction(RationalFunction.fromPolynomial(MPoly.variable(t).scale(c)));
+  return { k: 'lin', c, t };
+}
+
+/** The (c, t) of c·t when the scalar is a multiple of one variable. */
+function asLinear(s: Scalar): { c: Num; t: string } | undefined {
+  if (s.k === 'lin') return { c: s.c, t: s.t };
+  if (s.k !== 'sym' || !s.v.isPolynomial() || !s.v.den.isConstant()) return undefined;
+  const vars = s.v.variables();
+  if (vars.length !== 1) return undefined;
+  const p = s.v.num.toUnivariate(vars[0]);
+  if (!p || p.degree() !== 1 || !p.coeff(0).isZero()) return undefined;
+  return { c: p.coeff(1).div(s.v.den.constantTerm()), t: vars[0] };
+}
+
+/** Sums and products that stay of the form c·t with an irrational c. */
+function linearBinary(op: 'add' | 'sub' | 'mul', a: Scalar, b: Scalar): Scalar | undefined {
+  if (op === 'mul') {
+    const [n, l] = a.k === 'num' ? [a, asLinear(b)] : b.k === 'num' ? [b, asLinear(a)] : [undefined, undefined];
+    if (n && n.k === 'num' && l) return linear(NUM.mul(n.v, l.c), l.t);
+    return undefined;
+  }
+  const la = asLinear(a);
+  const lb = asLinear(b);
+  if (la && lb && la.t === lb.t) return linear(op === 'add' ? NUM.add(la.c, lb.c) : NUM.sub(la.c, lb.c), la.t);
+  if ((SCALAR.isZero(a) && lb) || (SCALAR.isZero(b) && la)) return op === 'sub' && SCALAR.isZero(a) ? linear(NUM.neg(lb!.c), lb!.t) : SCALAR.isZero(a) ? b : a;
+  return undefined;
+}
+
 function expVariable(a: Scalar, b: Scalar): string | null {
   return a.k === 'exp' ? a.t : b.k === 'exp' ? b.t : null;
 }
@@ -112,8 +147,14 @@ function binary(
   onNum: (x: Num, y: Num) => Num,
   onSym: (x: RationalFunction, y: RationalFunction) => RationalFunction,
   onExp: (x: ExpPolynomial<Num>, y: ExpPolynomial<Num>) => ExpPolynomial<Num>,
+  op?: 'add' | 'sub' | 'mul',
 ): Scalar {
   if (a.k === 'num' && b.k === 'num') return num(onNum(a.v, b.v));
+  if (op && (a.k === 'lin' || b.k === 'lin' || (a.k === 'num' && isAlgebraic(a.v) && b.k === 'sym') || (b.k === 'num' && isAlgebraic(b.v) && a.k === 'sym'))) {
+    const l = linearBinary(op, a, b);
+    if (l) return l;
+  }
+  if (a.k === 'lin' || b.k === 'lin') throw new DomainError('an irrational multiple of a variable can only be added to another one or used in e^{…}, cos, sin, cosh, sinh');
   if (a.k === 'exp' || b.k === 'exp') {
     const t = expVariable(a, b);
     return fromExp(onExp(toExp(a, t), toExp(b, t)), t);
@@ -141,22 +182,24 @@ export const SCALAR: Field<Scalar> = Object.freeze({
   name: 'scalars',
   zero: int(0),
   one: int(1),
-  add: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.add(x, y), (x, y) => x.add(y), (x, y) => x.add(y)),
-  sub: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.sub(x, y), (x, y) => x.sub(y), (x, y) => x.sub(y)),
-  mul: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.mul(x, y), (x, y) => x.mul(y), (x, y) => x.mul(y)),
+  add: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.add(x, y), (x, y) => x.add(y), (x, y) => x.add(y), 'add'),
+  sub: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.sub(x, y), (x, y) => x.sub(y), (x, y) => x.sub(y), 'sub'),
+  mul: (a: Scalar, b: Scalar) => binary(a, b, (x, y) => NUM.mul(x, y), (x, y) => x.mul(y), (x, y) => x.mul(y), 'mul'),
   div: divide,
-  neg: (a: Scalar): Scalar => (a.k === 'num' ? num(NUM.neg(a.v)) : a.k === 'sym' ? { k: 'sym', v: a.v.neg() } : { k: 'exp', v: a.v.neg(), t: a.t }),
+  neg: (a: Scalar): Scalar =>
+    a.k === 'num' ? num(NUM.neg(a.v)) : a.k === 'sym' ? { k: 'sym', v: a.v.neg() } : a.k === 'lin' ? { k: 'lin', c: NUM.neg(a.c), t: a.t } : { k: 'exp', v: a.v.neg(), t: a.t },
   inv: (a: Scalar) => divide(int(1), a),
-  isZero: (a: Scalar) => (a.k === 'num' ? NUM.isZero(a.v) : a.k === 'sym' ? a.v.isZero() : a.v.isZero()),
+  isZero: (a: Scalar) => (a.k === 'num' ? NUM.isZero(a.v) : a.k === 'sym' ? a.v.isZero() : a.k === 'lin' ? NUM.isZero(a.c) : a.v.isZero()),
   equals: (a: Scalar, b: Scalar) => {
     if (a.k !== b.k) return false;
     if (a.k === 'num') return NUM.equals(a.v, (b as typeof a).v);
     if (a.k === 'sym') return a.v.equals((b as typeof a).v);
+    if (a.k === 'lin') return a.t === (b as typeof a).t && NUM.equals(a.c, (b as typeof a).c);
     const e = b as typeof a;
     return a.t === e.t && a.v.equals(e.v);
   },
   fromInt: (n: bigint | number) => int(n),
-  toString: (a: Scalar) => (a.k === 'num' ? NUM.toString(a.v) : a.v.toString()),
+  toString: (a: Scalar) => (a.k === 'num' ? NUM.toString(a.v) : a.k === 'lin' ? `${NUM.toString(a.c)}*${a.t}` : a.v.toString()),
 });
 
 /** a^k for an integer k. */
@@ -181,6 +224,7 @@ export function powScalar(a: Scalar, k: number): Scalar {
  */
 function linearRate(arg: Scalar): { rate: Num; t: string | null } {
   if (arg.k === 'num') return { rate: arg.v, t: null };
+  if (arg.k === 'lin') return { rate: arg.c, t: arg.t };
   if (arg.k === 'sym') {
     const vars = arg.v.variables();
     if (vars.length === 1 && arg.v.isPolynomial() && arg.v.den.isConstant()) {
@@ -220,6 +264,7 @@ export function trigScalar(f: 'cos' | 'sin' | 'cosh' | 'sinh', arg: Scalar): Sca
 export function conjugateScalar(s: Scalar): Scalar {
   if (s.k === 'num') return num(s.v instanceof Rational ? s.v : NUM.add(NUM.zero, (s.v as AlgebraicNumber).conj()));
   if (s.k === 'sym') return s;
+  if (s.k === 'lin') return linear(conj(s.c), s.t);
   return fromExp(ExpPolynomial.fromTerms(NUM, s.v.terms.map((x) => ({ coef: conj(x.coef), power: x.power, rate: conj(x.rate) }))), s.t);
 }
 
