@@ -12,7 +12,7 @@ import { parseScriptArgument, primeScriptAt, type ScriptArgument } from './parse
 import { decorationCommands, distinctFonts, greekLetters, transparentFonts } from './vocabulary';
 
 /** Commands that can be the letter of a name besides the Greek letters. */
-const letterCommands = new Set(['\\ell', '\\hbar', '\\imath', '\\jmath', '\\pi', '\\infty']);
+const letterCommands = new Set(['\\ell', '\\hbar', '\\imath', '\\jmath', '\\pi', '\\infty', '\\partial', '\\nabla', '\\emptyset', '\\varnothing']);
 
 /** True when the token at `ahead` can begin a name. */
 export function startsName(c: Cursor, ahead: number): boolean {

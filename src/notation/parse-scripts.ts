@@ -123,6 +123,14 @@ function parseSingleScript(c: Cursor, first: Token): ScriptArgument {
       return { expr: { kind: 'error', start: first.start, end: c.lastEnd() }, braced: false, start: first.start, end: c.lastEnd(), special };
     }
   }
+  if (first.type === 'char' && (first.value === '-' || first.value === '+') && (c.peek(1).type === 'digit' || c.peek(1).type === 'letter')) {
+    // `A^-1` shows as A⁻ followed by 1: read what was meant, but say how to write it.
+    c.next();
+    const operand = parseSingleScript(c, c.peek());
+    c.report('notation.script-braces', `a signed exponent needs braces: write ^{${first.value}${c.tokens[c.pos - 1]!.value}}`, { start: first.start, end: operand.end });
+    const expr: Expr = { kind: 'negate', operand: operand.expr, sign: first.value as '-' | '+', start: first.start, end: operand.end };
+    return { expr, braced: false, start: first.start, end: operand.end, special: null };
+  }
   if (first.type === 'digit') {
     c.next();
     const expr: Expr = { kind: 'number', text: first.value, isDecimal: false, decimalPlaces: 0, start: first.start, end: first.end };

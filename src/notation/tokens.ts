@@ -92,8 +92,13 @@ export function tokenize(text: string, from: number, to: number, map: OffsetMap 
     tokens.push({ type, value, start: map.start(a), end: map.end(b), ...extra });
   };
   let i = from;
+  const droppedBraces = new Set<number>();
   while (i < to) {
     const c = text[i]!;
+    if (droppedBraces.has(i)) {
+      i++;
+      continue;
+    }
     if (c === ' ' || c === '\t' || c === '\n' || c === '\r' || c === '~' || c === '\u00a0') {
       i++;
       continue;
@@ -128,6 +133,23 @@ export function tokenize(text: string, from: number, to: number, map: OffsetMap 
       }
       if (ignoredCommands.has(name)) {
         i = j;
+        continue;
+      }
+      if (name === '\\boxed' || name === '\\textcolor') {
+        // Wrappers whose content is ordinary math (`\boxed{A = B}`): drop the wrapper and its
+        // braces, so a boxed statement is read like an unboxed one.
+        let k = skipSpaces(text, j, to);
+        if (name === '\\textcolor' && text[k] === '{') {
+          const colourEnd = skipBraced(text, k, to);
+          k = colourEnd < 0 ? to : skipSpaces(text, colourEnd, to);
+        }
+        if (text[k] === '{') {
+          const close = skipBraced(text, k, to);
+          if (close > 0) droppedBraces.add(close - 1);
+          i = k + 1;
+          continue;
+        }
+        i = k;
         continue;
       }
       if (ignoredWithArgument.has(name) || textCommands.has(name) || name === '\\begin' || name === '\\end') {

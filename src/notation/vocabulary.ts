@@ -57,6 +57,7 @@ export const operatorCommands: ReadonlyMap<string, FunctionName> = new Map<strin
   ['\\min', 'other'], ['\\gcd', 'other'], ['\\deg', 'other'], ['\\Re', 'other'], ['\\Im', 'other'],
   ['\\lim', 'other'], ['\\sup', 'other'], ['\\inf', 'other'], ['\\arctan', 'other'],
   ['\\arcsin', 'other'], ['\\arccos', 'other'], ['\\cot', 'other'], ['\\sec', 'other'], ['\\csc', 'other'],
+  ['\\sum', 'other'], ['\\prod', 'other'], ['\\int', 'other'], ['\\oint', 'other'], ['\\bigoplus', 'other'],
 ]);
 
 /** Names inside `\operatorname{…}` / `\mathrm{…}` that the notation understands. */

@@ -4,7 +4,7 @@
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
 import { childrenOf, parseMathExpression, type ApplyExpr, type Expr, type MatrixExpr, type NumberLiteral, type SymbolExpr } from '../../src/notation/index';
-import { expr, shape, textOf } from './helpers';
+import { expr, shape, split, textOf } from './helpers';
 
 const shapes: [string, string][] = [
   // names and reserved symbols
@@ -110,6 +110,8 @@ const shapes: [string, string][] = [
   ['\\cos t', 'cos(t)'],
   ['\\sinh(2t)', 'sinh(2t)'.replace('2t', 'multiply(2, t)')],
   ['\\ln 2', 'ln(2)'],
+  ['\\sum_{i=1}^{n} \\lambda_i', 'other[const:i](\\lambda_{i})'],
+  ['\\prod_i \\lambda_i', 'other[const:i](\\lambda_{i})'],
   // the operator-without-parentheses rule (SPEC §3)
   ['\\sin 2t', 'sin(multiply(2, t))'],
   ['\\cos\\sqrt{3}t', 'cos(multiply(sqrt(3), t))'],
@@ -219,6 +221,19 @@ test('function applications cover the name and the argument', () => {
     assert.equal(textOf(source, a), applyText, source);
     assert.deepEqual(a.args.map((x) => textOf(source, x)), argTexts, source);
   }
+});
+
+test('a signed exponent without braces is read as meant and reported', () => {
+  const r = parseMathExpression('A^-1');
+  assert.equal(shape(r.expr), 'pow(A, neg(1))');
+  assert.deepEqual(r.problems.map((p) => p.code), ['notation.script-braces']);
+});
+
+test('boxed and coloured math is read like plain math', () => {
+  const source = '\\boxed{\\det A = 16} \\quad \\textcolor{red}{\\operatorname{tr} A = 8}';
+  const r = split(source);
+  assert.deepEqual(r.problems, []);
+  assert.deepEqual(r.statements.map((s) => textOf(source, s)), ['\\det A = 16', '\\operatorname{tr} A = 8']);
 });
 
 test('braces group without showing: a braced number next to a number is a product', () => {
