@@ -16,7 +16,16 @@ export interface Span {
 
 /**
  * Something the parser could not understand, at a position. Parsers never throw: they return
- * what they understood plus these. Codes are stable dotted strings, e.g. `notation.unbalanced-brace`.
+ * what they understood plus these. Codes are stable dotted strings:
+ * - braces and environments: `notation.unbalanced-brace`, `notation.unclosed-environment`,
+ *   `notation.unmatched-end`, `notation.mismatched-environment`, `notation.environment-name`,
+ *   `notation.unclosed-delimiter`, `notation.unsupported-environment`;
+ * - tokens: `notation.unknown-character`, `notation.unknown-command`, `notation.stray-backslash`;
+ * - structure: `notation.missing-operand`, `notation.expected`, `notation.unexpected`,
+ *   `notation.unsupported`, `notation.script-braces` (`A^-1`), `notation.too-deep`;
+ * - matrices: `notation.empty-entry`, `notation.empty-matrix`, `notation.ragged-matrix`;
+ * - notary JSON: `notation.json-syntax`, `notation.json-escape`, `notation.json-matrix`,
+ *   `notation.json-number`.
  */
 export interface Problem extends Span {
   code: string;
