@@ -3,7 +3,7 @@
 // compared with the text they must cover). Readings of LaTeX are common practice, no source.
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
-import { childrenOf, parseMathExpression, type ApplyExpr, type Expr, type MatrixExpr, type NumberLiteral, type SymbolExpr } from '../../src/notation/index';
+import { childrenOf, parseMathExpression, stripPositions, type ApplyExpr, type Expr, type MatrixExpr, type NumberLiteral, type SymbolExpr } from '../../src/notation/index';
 import { expr, shape, split, textOf } from './helpers';
 
 const shapes: [string, string][] = [
@@ -261,4 +261,24 @@ test('sizes of identity and Jordan blocks are expressions with ranges', () => {
 test('unicode minus, middle dot and Greek letters are read', () => {
   assert.equal(shape(expr('A − 2·B')), 'subtract(A, multiply(2, B))');
   assert.equal(shape(expr('χ_A(λ)')), 'charpoly[A](\\lambda)');
+});
+
+test('every node’s range, sliced out and parsed alone, gives the same node', () => {
+  let nodes = 0;
+  for (const [source] of shapes) {
+    const root = expr(source);
+    const stack: [Expr, Expr | null][] = [[root, null]];
+    while (stack.length) {
+      const [node, parent] = stack.pop()!;
+      for (const kid of childrenOf(node)) stack.push([kid, node]);
+      // A node spanning exactly its parent's text (the matrix inside a vmatrix) was checked as the parent.
+      if (parent && parent.start === node.start && parent.end === node.end) continue;
+      const slice = textOf(source, node);
+      const alone = parseMathExpression(slice);
+      assert.deepEqual(alone.problems, [], `${node.kind} “${slice}” in ${source}`);
+      assert.deepEqual(stripPositions(alone.expr), stripPositions(node), `${node.kind} “${slice}” in ${source}`);
+      nodes++;
+    }
+  }
+  assert.ok(nodes > 400, `only ${nodes} nodes checked`);
 });
