@@ -16,7 +16,7 @@ const seed = Number(process.env.NOTARY_FUZZ_SEED ?? 20261202);
 describe('robustness properties', () => {
   for (const p of robustnessProperties()) {
     it(p.name, () => {
-      fc.assert(p.property as fc.IProperty<[unknown]>, { numRuns: p.testRuns, seed });
+      fc.assert(p.property, { numRuns: p.testRuns, seed });
     });
   }
 });
