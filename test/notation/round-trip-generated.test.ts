@@ -3,7 +3,7 @@
 // and parse → print → parse must give the same tree for every one of them.
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
-import { parseMathExpression, toLatex, toPlainText } from '../../src/notation/index';
+import { childrenOf, parseMathExpression, toLatex, toPlainText, type Expr } from '../../src/notation/index';
 import { assertSameTree, seededRandom } from './helpers';
 
 function generator(seed: number) {
@@ -69,4 +69,26 @@ test('generated expressions survive parse → print → parse unchanged', () => 
     assert.ok(toPlainText(first.expr).length > 0);
   }
   assert.ok(checked > 300, `only ${checked} generated expressions parsed cleanly`);
+});
+
+test('in generated expressions every node’s range re-parses to the same node', () => {
+  const next = generator(777);
+  let nodes = 0;
+  for (let n = 0; n < 200; n++) {
+    const source = next(1 + (n % 3));
+    const first = parseMathExpression(source);
+    if (first.problems.length) continue;
+    const stack: [Expr, Expr | null][] = [[first.expr, null]];
+    while (stack.length) {
+      const [node, parent] = stack.pop()!;
+      for (const kid of childrenOf(node)) stack.push([kid, node]);
+      if (parent && parent.start === node.start && parent.end === node.end) continue;
+      const slice = source.slice(node.start, node.end);
+      const alone = parseMathExpression(slice);
+      assert.deepEqual(alone.problems, [], `${node.kind} “${slice}” in ${source}`);
+      assertSameTree(alone.expr, node, `${node.kind} “${slice}” in ${source}`);
+      nodes++;
+    }
+  }
+  assert.ok(nodes > 1000, `only ${nodes} nodes checked`);
 });
