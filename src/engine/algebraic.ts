@@ -364,7 +364,20 @@ export class AlgebraicNumber {
   }
   /** Exact comparison of two real numbers. */
   compare(o: AlgebraicNumber): -1 | 0 | 1 {
-    return this.sub(o).sign();
+    if (this.rational && o.rational) return this.rational.compare(o.rational);
+    if (!this.isReal() || !o.isReal()) throw new DomainError('only real numbers are ordered');
+    if (this.equals(o)) return 0;
+    // Same minimal polynomial: real roots are listed in increasing order.
+    if (this.minimalPolynomial.equals(o.minimalPolynomial)) return this.rootIndex < o.rootIndex ? -1 : 1;
+    // Different minimal polynomials: the numbers differ, so refining separates the intervals
+    // (no resultant needed, whatever the degrees).
+    for (let digits = 4; digits < 5000; digits *= 2) {
+      const a = this.disk(digits);
+      const b = o.disk(digits);
+      if (a.re.add(a.radius).compare(b.re.sub(b.radius)) < 0) return -1;
+      if (b.re.add(b.radius).compare(a.re.sub(a.radius)) < 0) return 1;
+    }
+    throw new BudgetError('the comparison could not be decided');
   }
   /** Sign of the imaginary part, exact. */
   imagSign(): -1 | 0 | 1 {

@@ -203,3 +203,16 @@ test('minimal polynomials of sums, products and quotients agree with SymPy', { s
     assert.equal(build().minimalPolynomial.toString(), want.toString(), text);
   });
 });
+
+test('ordering of real algebraic numbers of any degree, without resultants', () => {
+  // Real roots of (x² − 2)(x³ − 3) and of x^11 − 2 against √2 and a rational (common practice, no source).
+  const r = A.rootsOf(P(-2, 0, 1).mul(P(-3, 0, 0, 1))).map((x) => x.value).filter((x) => x.isReal());
+  // Real roots: −√2 < ∛3 ≈ 1.442 and √2 ≈ 1.414 < ∛3.
+  const sorted = r.slice().sort((x, y) => x.compare(y));
+  assert.deepEqual(sorted.map((x) => x.approx(3)), ['-1.414', '1.414', '1.442']);
+  const big = A.rootOf(P(-2, ...new Array(10).fill(0), 1), 0); // 2^(1/11) ≈ 1.065
+  assert.equal(big.compare(A.sqrt(q(2))), -1);
+  assert.equal(big.compare(A.fromRational(q(1065, 1000))), 1);
+  assert.equal(big.compare(big), 0);
+  assert.throws(() => A.i().compare(A.fromInt(0)), /ordered/);
+});
