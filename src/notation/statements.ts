@@ -293,8 +293,17 @@ export function splitStatements(source: string, region: Region): SplitResult {
   const start = Math.max(0, Math.min(region.start, source.length));
   const end = Math.max(start, Math.min(region.end, source.length));
   if (region.kind === 'notary-line') {
-    const line = parseNotaryLine(source.slice(start, end), start);
-    return { statements: line.statements, problems: line.problems };
+    // One line is the usual region; a whole block is read line by line all the same.
+    const statements: Statement[] = [];
+    const problems: Problem[] = [];
+    let at = start;
+    for (const line of source.slice(start, end).split('\n')) {
+      const parsed = parseNotaryLine(line.replace(/\r$/, ''), at);
+      statements.push(...parsed.statements);
+      problems.push(...parsed.problems);
+      at += line.length + 1;
+    }
+    return { statements, problems };
   }
   const { tokens, problems } = tokenize(source, start, end);
   return splitTokens(tokens, problems, region.kind === 'align');

@@ -121,3 +121,12 @@ test('a trailing # remark is a comment, but not inside strings or after a backsl
   assert.deepEqual(latex.problems, []);
   assert.equal(textOf('\\det A = 16 # from the datasheet', latex.statements[0]!), '\\det A = 16');
 });
+
+test('a whole notary block given as one region is read line by line', () => {
+  const block = '# plant\r\nA = [[4, 1], [0, 4]]\r\n\\det A = 16\n\n\\operatorname{tr} A = 8';
+  const doc = `\`\`\`notary\n${block}\n\`\`\``;
+  const start = doc.indexOf(block);
+  const r = splitStatements(doc, { start, end: start + block.length, kind: 'notary-line' });
+  assert.deepEqual(r.problems, []);
+  assert.deepEqual(r.statements.map((s) => textOf(doc, s)), ['A = [[4, 1], [0, 4]]', '\\det A = 16', '\\operatorname{tr} A = 8']);
+});
