@@ -63,8 +63,8 @@ function markdownEvents(text: string): Event[] {
 export function scanMarkdown(text: string): ScanResult {
   // micromark drops a leading byte-order mark and counts offsets without it; we scan the text
   // after the mark and move every offset back by one, so offsets index `text` itself.
-  if (text.charCodeAt(0) !== 0xfeff) return scanWithoutByteOrderMark(text);
-  const result = scanWithoutByteOrderMark(text.slice(1));
+  if (text.charCodeAt(0) !== 0xfeff) return scanWithAttachedDisplays(text);
+  const result = scanWithAttachedDisplays(text.slice(1));
   const move = (r: TextRange): TextRange => ({ start: r.start + 1, end: r.end + 1 });
   return {
     regions: result.regions.map((region) => ({
@@ -78,6 +78,61 @@ export function scanMarkdown(text: string): ScanResult {
     })),
     problems: result.problems.map((problem) => ({ ...problem, start: problem.start + 1, end: problem.end + 1 })),
   };
+}
+
+/** Most passes spent on `$$` blocks written with math on their delimiter lines. */
+const MAX_ATTACHED_PASSES = 64;
+
+/**
+ * Many notes write display math with the delimiters on the content lines:
+ *
+ *     $$\begin{aligned}
+ *     \det A &= 5
+ *     \end{aligned}$$
+ *
+ * CommonMark math reads the text after an opening `$$` as the block's meta and waits for a line
+ * holding only `$$`, swallowing what follows. We honour the writer's intent: such a block is
+ * display math from the opening `$$` to the next `$$`. The block is then blanked (same length, line
+ * breaks kept) and the document scanned again, so everything after it is read as usual.
+ */
+function scanWithAttachedDisplays(text: string): ScanResult {
+  let work = text;
+  const attached: MathRegion[] = [];
+  for (let pass = 0; pass < MAX_ATTACHED_PASSES; pass++) {
+    const result = scanWithoutByteOrderMark(work);
+    const region = result.regions.find((r) => r.delimiter === '$$' && r.kind === 'display' && opensWithMath(work, r));
+    const open = region ? work.indexOf('$$', region.start) : -1;
+    const close = open >= 0 ? work.indexOf('$$', open + 2) : -1;
+    if (!region || close < 0) {
+      if (attached.length === 0) return result;
+      const problems = result.problems.filter((p) => !attached.some((a) => a.start <= p.start && p.end <= a.end));
+      const regions = [...result.regions, ...attached].sort((a, b) => a.start - b.start);
+      return { regions, problems };
+    }
+    attached.push({
+      kind: 'display',
+      delimiter: '$$',
+      start: open,
+      end: close + 2,
+      contentStart: open + 2,
+      contentEnd: close,
+      skips: closeRanges(region.skips, open + 2, close),
+    });
+    work = work.slice(0, open) + work.slice(open, close + 2).replace(/[^\r\n]/g, ' ') + work.slice(close + 2);
+  }
+  return scanWithoutByteOrderMark(work);
+}
+
+/** True when a `$$` block has math on its opening line (CommonMark would call it meta). */
+function opensWithMath(text: string, region: MathRegion): boolean {
+  const open = text.indexOf('$$', region.start);
+  if (open < 0 || open > region.contentStart) return false;
+  let i = open + 2;
+  while (i < text.length && text[i] !== '\n' && text[i] !== '\r') {
+    if (text[i] !== ' ' && text[i] !== '\t') return true;
+    i++;
+  }
+  return false;
 }
 
 function scanWithoutByteOrderMark(text: string): ScanResult {

@@ -6,7 +6,7 @@
  * 0.31.2, §4.5 fenced code, §4.4 indented code, §6.1 backslash escapes, §6.3 code spans,
  * §4.6 HTML blocks) and the math extension's (`$`/`$$` behave like code-span runs).
  */
-import { describe, it } from 'node:test';
+import { describe, it, test } from 'node:test';
 import assert from 'node:assert/strict';
 import { mathSource, scanDocument } from '../../src/document/index';
 import { type RegionView, scanView } from './helpers';
@@ -140,4 +140,18 @@ describe('Markdown offsets', () => {
     assert.deepEqual(kinds({}), ['inline', 'display', 'notary']);
     assert.deepEqual(kinds({ inline: false, notary: false }), ['display']);
   });
+});
+
+test('display math written with $$ on its content lines closes at the next $$ (and keeps what follows)', () => {
+  const text = '$$\\begin{aligned}\n\\det A &= 8\n\\end{aligned}$$\n\nText $x$.\n\n$$\\det A = 9$$\n';
+  const { regions, problems } = scanDocument(text, 'markdown');
+  assert.deepEqual(
+    regions.map((r) => [r.kind, text.slice(r.contentStart, r.contentEnd)]),
+    [
+      ['display', '\\begin{aligned}\n\\det A &= 8\n\\end{aligned}'],
+      ['inline', 'x'],
+      ['display', '\\det A = 9'],
+    ],
+  );
+  assert.deepEqual(problems, []);
 });

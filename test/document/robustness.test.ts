@@ -118,6 +118,9 @@ describe('scanning mutated notes', () => {
     const next = random(977);
     for (let i = 0; i < 200; i++) {
       const text = mutate(markdownNote, next);
+      // A `$$` line with math after the delimiter is read as display math up to the next `$$`
+      // on purpose (see markdown.ts), where CommonMark would call that text meta: not comparable.
+      if (/^[ >]*\$\$[ \t]*[^\s$]/m.test(text)) continue;
       const { regions } = scanDocument(text, 'markdown');
       const escaped = regions.filter((r) => r.delimiter === '\\(' || r.delimiter === '\\[');
       const ours = regions.filter((r) => !escaped.includes(r)).map((r) => collapse(mathSource(text, r)));
