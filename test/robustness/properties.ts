@@ -118,13 +118,13 @@ export function robustnessProperties(): NamedProperty[] {
       name: 'the notation parser and splitter never throw on loose math and keep every range inside',
       property: erase(fc.property(looseMath, kinds, (math, kind) => checkParser(math, kind))),
       testRuns: 1500,
-      fuzzWeight: 0.3,
+      fuzzWeight: 0.4,
     },
     {
       name: 'the document scanner never throws on mutated whole notes and keeps regions ordered and inside',
       property: erase(fc.property(mutatedNote(notes, { maxWindow: 0, maxMutations: 8 }), (note) => void checkScan(note))),
       testRuns: 15,
-      fuzzWeight: 0.05,
+      fuzzWeight: 0.02,
     },
     {
       name: 'the document scanner never throws on mutated note windows and keeps regions ordered and inside',
@@ -136,19 +136,19 @@ export function robustnessProperties(): NamedProperty[] {
       name: 'the document scanner never throws on documents of bare delimiters and fences',
       property: erase(fc.property(pieceDocument, (note) => void checkScan(note))),
       testRuns: 500,
-      fuzzWeight: 0.1,
+      fuzzWeight: 0.15,
     },
     {
       name: 'the checker answers every mutated note window with valid verdicts, ranges and disjoint fixes',
       property: erase(fc.property(mutatedNote(notes, { maxWindow: 1500, maxMutations: 6 }), (note) => checkChecker(note, 50))),
       testRuns: 160,
-      fuzzWeight: 0.35,
+      fuzzWeight: 0.2,
     },
     {
       name: 'the checker answers documents of bare delimiters and fences',
       property: erase(fc.property(pieceDocument, (note) => checkChecker(note, 50))),
       testRuns: 400,
-      fuzzWeight: 0.1,
+      fuzzWeight: 0.13,
     },
   ];
 }

@@ -1,0 +1,52 @@
+/**
+ * `npm run fuzz`: the robustness properties of test/robustness with many more cases than the test
+ * suite gives them (100,000 in all by default). Each property gets its share of the cases; a
+ * failure prints the seed, the replay path and the shrunk counterexample, and the run goes on with
+ * the next property. Exit status 1 when any property failed.
+ *
+ *   npm run fuzz                         # 100,000 cases, a fresh random seed (printed)
+ *   npm run fuzz -- --runs 500000 --seed 12345 --only checker
+ *   NOTARY_STRICT_SURROGATES=1 npm run fuzz   # also fail on ranges that split an astral character
+ *
+ * Replaying a failure: the same `--seed` with `--only <property>` and `--runs` reproduces it.
+ */
+import fc from 'fast-check';
+import { robustnessProperties } from '../test/robustness/properties';
+
+function option(name: string): string | undefined {
+  const at = process.argv.indexOf(`--${name}`);
+  return at >= 0 ? process.argv[at + 1] : undefined;
+}
+
+const total = Number(option('runs') ?? 100_000);
+const seed = Number(option('seed') ?? Math.floor(Math.random() * 2 ** 31));
+const only = option('only');
+if (!Number.isSafeInteger(total) || total < 1 || !Number.isSafeInteger(seed)) {
+  console.error('usage: npm run fuzz -- [--runs N] [--seed S] [--only TEXT]');
+  process.exit(2);
+}
+
+const properties = robustnessProperties().filter((p) => !only || p.name.includes(only));
+const weights = properties.reduce((sum, p) => sum + p.fuzzWeight, 0);
+console.log(`fuzz: ${total} cases over ${properties.length} properties, seed ${seed}`);
+
+let failed = 0;
+let ran = 0;
+const started = Date.now();
+for (const p of properties) {
+  const numRuns = Math.max(1, Math.ceil((total * p.fuzzWeight) / weights));
+  const t0 = Date.now();
+  const details = fc.check(p.property, { numRuns, seed });
+  ran += details.numRuns;
+  const seconds = ((Date.now() - t0) / 1000).toFixed(1);
+  if (details.failed) {
+    failed++;
+    console.log(`FAIL  ${p.name} (${details.numRuns} of ${numRuns} cases, ${seconds} s)`);
+    console.log(`      replay: npm run fuzz -- --seed ${seed} --runs ${total} --only "${p.name}"  (fast-check path ${details.counterexamplePath})`);
+    console.log(fc.defaultReportMessage(details) ?? '(no report)');
+  } else {
+    console.log(`ok    ${p.name} (${details.numRuns} cases, ${seconds} s)`);
+  }
+}
+console.log(`fuzz: ${ran} cases in ${((Date.now() - started) / 1000).toFixed(0)} s, seed ${seed}: ${failed ? `${failed} propert${failed === 1 ? 'y' : 'ies'} failed` : 'no failure'}`);
+process.exit(failed ? 1 : 0);
