@@ -32,3 +32,4 @@ export * from './exppoly-matrix';
 export * from './powers';
 export * from './stability';
 export * from './multivariate-gcd';
+export * from './disk';
