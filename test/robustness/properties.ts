@@ -18,7 +18,7 @@ import { assertCheckedDocument, assertRange, smallBudget, sourceNotes } from './
 /** A named property with the number of runs it gets in the test suite and in the fuzz run. */
 export interface NamedProperty {
   readonly name: string;
-  readonly property: fc.IRawProperty<unknown[]>;
+  readonly property: fc.IRawProperty<unknown[], false>;
   /** Runs in `npm test`: chosen so this folder stays well under 20 s on a loaded 2-core machine. */
   readonly testRuns: number;
   /** Share of the fuzz run's cases (the fuzz run gives each property `weight × total` runs). */
@@ -26,8 +26,8 @@ export interface NamedProperty {
 }
 
 /** Forgets a property's argument types so properties of different shapes share one list. */
-function erase<Ts extends unknown[]>(property: fc.IRawProperty<Ts>): fc.IRawProperty<unknown[]> {
-  return property as unknown as fc.IRawProperty<unknown[]>;
+function erase<Ts extends unknown[]>(property: fc.IRawProperty<Ts, false>): fc.IRawProperty<unknown[], false> {
+  return property as unknown as fc.IRawProperty<unknown[], false>;
 }
 
 /** Every node's range lies inside [lo, hi] and inside its parent's; printing never throws. */
