@@ -11,6 +11,7 @@ import {
   ignoredWithArgument,
   textCommands,
   unicodeCommands,
+  unicodeSuperscripts,
   unicodeSymbols,
 } from './vocabulary';
 
@@ -216,6 +217,20 @@ export function tokenize(text: string, from: number, to: number, map: OffsetMap 
     if ('()[]{}+-*/=,;<>|&^_\'!.:?'.includes(c)) {
       push('char', c, i, i + 1);
       i++;
+      continue;
+    }
+    if (unicodeSuperscripts.has(c)) {
+      // Typed superscripts (`A²`, `A⁻¹`, `Aᵀ`) read as `^{…}` over the same characters.
+      let j = i;
+      while (j < to && unicodeSuperscripts.has(text[j]!)) j++;
+      push('char', '^', i, i);
+      push('char', '{', i, i);
+      for (let k = i; k < j; k++) {
+        const value = unicodeSuperscripts.get(text[k]!)!;
+        push(/[0-9]/.test(value) ? 'digit' : /[A-Za-z]/.test(value) ? 'letter' : 'char', value, k, k + 1);
+      }
+      push('char', '}', j, j);
+      i = j;
       continue;
     }
     // Characters outside the basic plane come in surrogate pairs; take the whole code point.

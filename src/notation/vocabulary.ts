@@ -24,7 +24,14 @@ export const unicodeCommands: ReadonlyMap<string, string> = new Map([
   ['Ψ', '\\Psi'], ['Ω', '\\Omega'], ['Σ', '\\Sigma'],
   ['·', '\\cdot'], ['×', '\\times'], ['≤', '\\le'], ['≥', '\\ge'], ['≠', '\\neq'],
   ['≈', '\\approx'], ['∼', '\\sim'], ['⊕', '\\oplus'], ['±', '\\pm'], ['∓', '\\mp'],
-  ['∞', '\\infty'], ['≔', '\\coloneqq'], ['⊤', '\\top'], ['†', '\\dagger'],
+  ['∞', '\\infty'], ['≔', '\\coloneqq'], ['⊤', '\\top'], ['†', '\\dagger'], ['√', '\\sqrt'],
+  ['∈', '\\in'], ['→', '\\to'], ['⇒', '\\Rightarrow'], ['⊗', '\\otimes'], ['ℓ', '\\ell'],
+]);
+
+/** Typed superscript characters and the plain character each stands for. */
+export const unicodeSuperscripts: ReadonlyMap<string, string> = new Map([
+  ['⁰', '0'], ['¹', '1'], ['²', '2'], ['³', '3'], ['⁴', '4'], ['⁵', '5'], ['⁶', '6'], ['⁷', '7'],
+  ['⁸', '8'], ['⁹', '9'], ['⁻', '-'], ['⁺', '+'], ['ᵀ', 'T'], ['ᴴ', 'H'], ['ᵏ', 'k'], ['ⁿ', 'n'],
 ]);
 
 /** Unicode characters that are plain ASCII operators in disguise. */

@@ -258,9 +258,15 @@ test('sizes of identity and Jordan blocks are expressions with ranges', () => {
   assert.equal(textOf(source, e.right.args[0]!), '\\lambda');
 });
 
-test('unicode minus, middle dot and Greek letters are read', () => {
+test('unicode minus, middle dot, Greek letters and typed superscripts are read', () => {
   assert.equal(shape(expr('A − 2·B')), 'subtract(A, multiply(2, B))');
   assert.equal(shape(expr('χ_A(λ)')), 'charpoly[A](\\lambda)');
+  assert.equal(shape(expr('A⁻¹ + Aᵀ + λ² + Aᴴ')), 'add(add(add(pow(A, neg(1)), T(A)), pow(\\lambda, 2)), H(A))');
+  assert.equal(shape(expr('√2')), 'sqrt(2)');
+  const source = 'x + A⁻¹';
+  const e = expr(source);
+  if (e.kind !== 'add') throw new Error('shape');
+  assert.equal(textOf(source, e.right), 'A⁻¹');
 });
 
 test('every node’s range, sliced out and parsed alone, gives the same node', () => {
