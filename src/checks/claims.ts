@@ -70,9 +70,10 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   const relation = link.relation.kind;
   const isFirst = index === 0 && !statement.continued && !link.continued;
   if (relation === 'other') return undefined;
+  if (!ctx.definitionsOnly && isEquation(link, ctx)) return undefined;
 
   // Definitions: `A := M` always; `A = M` when A has no definition above.
-  if (left.kind === 'symbol' && !RESERVED.has(left.base) && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup(left.key)))) {
+  if (left.kind === 'symbol' && !RESERVED.has(left.base) && !left.decorations.includes('dot') && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup(left.key)))) {
     const definition = tryDefinition(left.key, left.start, left.end, link, ctx);
     if (definition !== 'not-a-matrix') return definition;
     // A scalar named by a letter (`d = \det A`): not bound, and not a claim on its own.
@@ -82,6 +83,7 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   if (ctx.definitionsOnly) return undefined;
   const involves = chainIsClaim || involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
   if (!involves && relation !== 'similar') return undefined;
+  if (isEquation(link, ctx)) return undefined;
   return decideClaim(link, statement, ctx);
 }
 
@@ -101,9 +103,14 @@ function tryDefinition(key: string, nameStart: number, nameEnd: number, link: Li
   }
   if (value.kind !== 'matrix') return 'not-a-matrix';
   let environment: MatrixEnvironment | undefined;
+  const parameters: string[] = [];
   walk(link.right, (n) => {
-    if (n.kind === 'matrix' && !environment) environment = n.environment;
+    if (n.kind === 'matrix') {
+      if (!environment) environment = n.environment;
+      for (const entry of n.rows.flat()) walk(entry, (m) => void (m.kind === 'symbol' && !ctx.env.lookup(m.key) && parameters.push(m.key)));
+    }
   });
+  ctx.env.addParameters(parameters);
   ctx.env.define({
     key,
     name: ctx.text.slice(nameStart, nameEnd),
@@ -170,13 +177,74 @@ function claimFamily(e: Expr): string {
   return 'matrix';
 }
 
+/** A free symbol that is not a parameter of a defined matrix: an unknown. */
+function isUnknown(n: Expr, ctx: StatementContext): boolean {
+  return n.kind === 'symbol' && !ctx.env.lookup(n.key) && !ctx.env.isParameter(n.key);
+}
+
+/** True for `0`, `0·I`, a zero matrix literal. */
+function isZeroLiteral(e: Expr): boolean {
+  const u = unwrap(e);
+  if (u.kind === 'number') return /^0*(\.0*)?$/.test(u.text);
+  if (u.kind === 'matrix') return u.rows.flat().every(isZeroLiteral);
+  return false;
+}
+
+/**
+ * An equation to solve rather than a claim: `\det(\lambda I - A) = 0`, `(A - \lambda I)v = 0`,
+ * `K\phi = \omega^2 M\phi`, `\dot x = Ax + Bu`, `\Phi(t) = e^{At}`. Notes are full of these and they
+ * get no verdict: a side that is zero with unknowns on the other side; an unknown (a free symbol
+ * that no defined matrix mentions, or a dotted/derived quantity) multiplied into a matrix; or a
+ * function of t or s named on the left.
+ */
+function isEquation(link: Link, ctx: StatementContext): boolean {
+  if (link.relation.kind === 'similar') return false;
+  const hasUnknown = (e: Expr) => {
+    let found = false;
+    walk(e, (n) => {
+      if (n.kind === 'matrix' || (n.kind === 'apply' && (n.func === 'charpoly' || n.func === 'minpoly' || n.func === 'exp' || n.func === 'cos' || n.func === 'sin' || n.func === 'cosh' || n.func === 'sinh'))) return false;
+      if (isUnknown(n, ctx)) found = true;
+      return !found;
+    });
+    return found;
+  };
+  if ((isZeroLiteral(link.right) && hasUnknown(link.left)) || (isZeroLiteral(link.left) && hasUnknown(link.right))) return true;
+  let vectorUnknown = false;
+  for (const side of [link.left, link.right]) {
+    walk(side, (n) => {
+      if (vectorUnknown || n.kind === 'matrix') return false;
+      if (n.kind === 'multiply') {
+        const matrixSide = involvesMatrix(n.left, ctx.env) || involvesMatrix(n.right, ctx.env);
+        const tail = unwrap(n.right);
+        const unknownTail =
+          (tail.kind === 'symbol' && isUnknown(tail, ctx) && !looksLikeMatrixName(tail.base)) ||
+          (tail.kind === 'symbol' && tail.decorations.length > 0 && isUnknown(tail, ctx)) ||
+          tail.kind === 'tuple';
+        if (matrixSide && unknownTail) vectorUnknown = true;
+      }
+      return !vectorUnknown;
+    });
+  }
+  if (vectorUnknown) return true;
+  // `\Phi(t) = …`, `G(s) = …`, `x(t) = …`: a function being named.
+  const left = unwrap(link.left);
+  if (left.kind === 'multiply' && unwrap(left.left).kind === 'symbol' && isUnknown(unwrap(left.left), ctx)) {
+    const arg = unwrap(left.right);
+    if (left.right.kind === 'group' && arg.kind === 'symbol' && isUnknown(arg, ctx)) return true;
+  }
+  if (left.kind === 'symbol' && left.decorations.some((d) => d === 'dot')) return true;
+  return false;
+}
+
 /** Capital-letter names with no definition above, outside matrix literals (where they are scalars), in order. */
 function undefinedMatrixNames(link: Link, ctx: StatementContext): { name: string; key: string }[] {
   const found: { name: string; key: string; start: number }[] = [];
   for (const side of [link.left, link.right]) {
     walk(side, (n) => {
       if (n.kind === 'matrix') return false;
-      if (n.kind === 'symbol' && looksLikeMatrixName(n.base) && !ctx.env.lookup(n.key)) found.push({ name: displayName(n.key), key: n.key, start: n.start });
+      if (n.kind === 'symbol' && looksLikeMatrixName(n.base) && !ctx.env.lookup(n.key) && !ctx.env.isParameter(n.key)) {
+        found.push({ name: displayName(n.key), key: n.key, start: n.start });
+      }
     });
   }
   found.sort((a, b) => a.start - b.start);

@@ -26,6 +26,17 @@ export class Environment {
   private readonly byKey = new Map<string, Definition>();
   private readonly all: Definition[] = [];
   private readonly failures = new Map<string, { code: string; message: string }>();
+  private readonly parameterKeys = new Set<string>();
+
+  /** Records the free symbols written inside a defined matrix: they are the model's parameters. */
+  addParameters(keys: Iterable<string>): void {
+    for (const k of keys) this.parameterKeys.add(k);
+  }
+
+  /** True when a symbol was written inside a defined matrix (k, m, L, C, ω …). */
+  isParameter(key: string): boolean {
+    return this.parameterKeys.has(key);
+  }
 
   /** Remembers that the definition of a name (by key) could not be read, and why. */
   fail(key: string, reason: { code: string; message: string }): void {

@@ -98,10 +98,29 @@ export function isLiteralValue(e: Expr, env: Environment): boolean {
   return literal;
 }
 
-/** The largest number of decimal places written in the expression, or undefined without decimals. */
+/** The integer k of a literal 10^{k} (also 10^{-k}), or undefined. */
+function powerOfTen(e: Expr): number | undefined {
+  if (e.kind !== 'power' || e.base.kind !== 'number' || e.base.text !== '10') return undefined;
+  const x = e.exponent.kind === 'group' ? e.exponent.inner : e.exponent;
+  if (x.kind === 'number' && !x.isDecimal) return Number(x.text);
+  if (x.kind === 'negate' && x.operand.kind === 'number' && !x.operand.isDecimal) return (x.sign === '-' ? -1 : 1) * Number(x.operand.text);
+  return undefined;
+}
+
+/**
+ * The largest number of decimal places written in the expression, or undefined without decimals.
+ * Scientific notation counts: 3.749 \times 10^{-12} is written to 15 places.
+ */
 export function decimalPlaces(e: Expr): number | undefined {
   let places: number | undefined;
   walk(e, (n) => {
+    if (n.kind === 'multiply' && n.left.kind === 'number' && n.left.isDecimal) {
+      const k = powerOfTen(n.right);
+      if (k !== undefined) {
+        places = Math.max(places ?? 0, Math.max(0, n.left.decimalPlaces - k));
+        return false;
+      }
+    }
     if (n.kind === 'number' && n.isDecimal) places = Math.max(places ?? 0, n.decimalPlaces);
   });
   return places;

@@ -27,8 +27,9 @@ function braceGroup(s: string, open: number): { content: string; next: number } 
   return undefined;
 }
 
+/** One number, one letter, or the root of one: safe to write next to a slash. */
 function simple(text: string): boolean {
-  return /^-?[\p{L}\p{N}.√]+$/u.test(text);
+  return /^-?√?(\p{N}+(\.\p{N}+)?|\p{L})$/u.test(text);
 }
 
 /** Rewrites `\cmd{a}{b}` (or `\cmd{a}`) with brace-aware matching, innermost content first. */
