@@ -218,6 +218,36 @@ export function gcdIntPoly(a: IntPoly, b: IntPoly): IntPoly {
   return primitiveInt(x);
 }
 
+/**
+ * Yun's square-free decomposition over Z (von zur Gathen & Gerhard, Modern Computer Algebra,
+ * Algorithm 14.21) on a primitive polynomial: [f_i, i] with f = ∏ f_i^i, each f_i primitive with
+ * positive leading coefficient (up to the sign of f), non-constant ones only. Every division is
+ * exact in Z[x] by Gauss's lemma, as the divisors are primitive.
+ */
+export function squareFreeInt(f: IntPoly): [IntPoly, number][] {
+  if (f.length < 2) return [];
+  const df = derivInt(f);
+  const a0 = gcdIntPoly(f, df);
+  if (a0.length === 1) return [[primitiveInt(f), 1]];
+  const exact = (x: IntPoly, y: IntPoly): IntPoly => {
+    const q = divExactInt(x, y);
+    if (!q) throw new RangeError('internal: inexact division in square-free decomposition');
+    return q;
+  };
+  const out: [IntPoly, number][] = [];
+  let b = exact(f, a0);
+  let c = exact(df, a0);
+  let d = subInt(c, derivInt(b));
+  for (let i = 1; b.length > 1; i++) {
+    const a = gcdIntPoly(b, d);
+    if (a.length > 1) out.push([a, i]);
+    b = exact(b, a);
+    c = exact(d, a);
+    d = subInt(c, derivInt(b));
+  }
+  return out;
+}
+
 /** a(x + 1) by the O(n²) Taylor shift (the step of Descartes-rule root isolation). */
 export function taylorShiftOne(a: IntPoly): IntPoly {
   const c = a.slice();

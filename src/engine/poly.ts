@@ -5,7 +5,7 @@
  */
 import { Rational, gcdInt as gcdInteger } from './rational';
 import { DomainError } from './errors';
-import { type IntPoly, gcdIntPoly, trimInt } from './intpoly';
+import { type IntPoly, gcdIntPoly, squareFreeInt, trimInt } from './intpoly';
 
 function lcmInt(a: bigint, b: bigint): bigint {
   return (a / gcdInteger(a, b)) * b;
@@ -279,23 +279,8 @@ export function polyExtendedGcd(a: Poly, b: Poly): { gcd: Poly; s: Poly; t: Poly
  */
 export function squareFreeDecomposition(p: Poly): [Poly, number][] {
   if (p.degree() < 1) return [];
-  const out: [Poly, number][] = [];
-  const f = p.monic();
-  const df = f.derivative();
-  const a0 = polyGcd(f, df);
-  let b = f.divExact(a0);
-  let c = df.divExact(a0);
-  let d = c.sub(b.derivative());
-  let i = 1;
-  while (b.degree() > 0) {
-    const a = polyGcd(b, d);
-    if (a.degree() > 0) out.push([a, i]);
-    b = b.divExact(a);
-    c = d.divExact(a);
-    d = c.sub(b.derivative());
-    i++;
-  }
-  return out;
+  // Runs over Z on the primitive part (no rational normalisation in the inner loop).
+  return squareFreeInt(toIntPoly(p)).map(([f, i]) => [fromIntPolyMonic(f), i]);
 }
 
 /** The square-free part: the product of the distinct monic irreducible factors. */
