@@ -33,18 +33,22 @@ export function pointDisk(re: Rational, im: Rational = Rational.ZERO): Disk {
   return { re, im, radius: Rational.ZERO };
 }
 
+/** A disk holding every sum of points of a and b. */
 export function diskAdd(a: Disk, b: Disk): Disk {
   return { re: a.re.add(b.re), im: a.im.add(b.im), radius: a.radius.add(b.radius) };
 }
 
+/** −a. */
 export function diskNeg(a: Disk): Disk {
   return { re: a.re.neg(), im: a.im.neg(), radius: a.radius };
 }
 
+/** A disk holding every difference of points of a and b. */
 export function diskSub(a: Disk, b: Disk): Disk {
   return diskAdd(a, diskNeg(b));
 }
 
+/** The mirror image in the real axis. */
 export function diskConj(a: Disk): Disk {
   return { re: a.re, im: a.im.neg(), radius: a.radius };
 }

@@ -42,6 +42,7 @@ export function invMod(a: number, p: number): number {
   return ((s0 % p) + p) % p;
 }
 
+/** a + b over F_p. */
 export function addMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   const n = Math.max(a.length, b.length);
   const out: ModPoly = new Array(n);
@@ -52,6 +53,7 @@ export function addMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   return trimMod(out);
 }
 
+/** a − b over F_p. */
 export function subMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   const n = Math.max(a.length, b.length);
   const out: ModPoly = new Array(n);
@@ -62,6 +64,7 @@ export function subMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   return trimMod(out);
 }
 
+/** a · b over F_p (each product reduced: safe for every p < 2^26). */
 export function mulMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   if (a.length === 0 || b.length === 0) return [];
   const out: ModPoly = new Array(a.length + b.length - 1).fill(0);
@@ -73,6 +76,7 @@ export function mulMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   return trimMod(out);
 }
 
+/** c · a over F_p. */
 export function scaleMod(a: ModPoly, c: number, p: number): ModPoly {
   return trimMod(a.map((x) => (x * c) % p));
 }
@@ -105,6 +109,7 @@ export function divmodMod(a: ModPoly, b: ModPoly, p: number): { q: ModPoly; r: M
   return { q: trimMod(q), r: trimMod(r) };
 }
 
+/** a mod b over F_p. */
 export function remMod(a: ModPoly, b: ModPoly, p: number): ModPoly {
   return divmodMod(a, b, p).r;
 }
@@ -206,6 +211,7 @@ export function powModPoly(base: ModPoly, e: bigint, m: ModPoly, p: number): Mod
   return acc;
 }
 
+/** Formal derivative over F_p. */
 export function derivMod(a: ModPoly, p: number): ModPoly {
   const out: ModPoly = [];
   for (let i = 1; i < a.length; i++) out.push((a[i] * (i % p)) % p);
