@@ -8,7 +8,9 @@ import { plainText } from './plain';
 import type { Checker, CheckOptions, DecomposeResult, MatrixDescription } from './api';
 import { processStatement, type StatementContext } from './claims';
 import { describeAt, decompose } from './describe';
-import { Environment } from './environment';
+import { Environment, type Definition } from './environment';
+import { walk } from './inspect';
+import { SCALAR } from './scalar';
 import { defaultCheckerConfig, type CheckedDocument, type CheckerConfig, type ClaimResult, type DocumentLanguage, type RegionSummary, type TextProblem } from './types';
 
 /** The parts a checker is built from. */
@@ -56,10 +58,64 @@ export function readStatements(text: string, language: DocumentLanguage, config:
   return { statements, problems };
 }
 
+/** Most statements whose verdicts are kept for re-use between checks of an edited document. */
+const CACHE_LIMIT = 20_000;
+
+/**
+ * What a statement's verdicts depend on: its own text, the values of the names it mentions as
+ * they are bound here, and (for an align continuation) the claim it continues. Equal keys give
+ * equal verdicts, so an edit re-decides only the statements whose text or bindings changed.
+ */
+function statementKey(statement: Statement, text: string, env: Environment, state: StatementContext['state']): string {
+  const names = new Set<string>();
+  for (const term of statement.terms) walk(term, (n) => void (n.kind === 'symbol' && names.add(n.key)));
+  const bindings = [...names].sort().map((key) => {
+    const def = env.lookup(key);
+    if (def) return `${key}=${fingerprint(def)}`;
+    if (env.failure(key)) return `${key}!${env.failure(key)!.message}`;
+    return env.isParameter(key) ? `${key}?p` : `${key}?`;
+  });
+  const continued = statement.continued ? `|${state.previousWasClaim}|${state.chainHead ? text.slice(state.chainHead.start, state.chainHead.end) : ''}` : '';
+  return `${text.slice(statement.start, statement.end)}\u0000${bindings.join('\u0000')}${continued}`;
+}
+
+const fingerprints = new WeakMap<Definition, string>();
+
+function fingerprint(def: Definition): string {
+  let f = fingerprints.get(def);
+  if (f === undefined) {
+    f = `${def.value.rows}x${def.value.cols}:${def.value.entries.map((e) => SCALAR.toString(e)).join(',')}:${def.hasDecimals}`;
+    fingerprints.set(def, f);
+  }
+  return f;
+}
+
+interface CachedVerdicts {
+  /** Results with every offset relative to the statement's start. */
+  readonly results: readonly ClaimResult[];
+}
+
+function shift(results: readonly ClaimResult[], by: number, env?: Environment): ClaimResult[] {
+  return results.map((r) => ({
+    ...r,
+    start: r.start + by,
+    end: r.end + by,
+    ...(r.fix ? { fix: { ...r.fix, offset: r.fix.offset + by } } : {}),
+    // Related definitions are looked up again: they may have moved.
+    related: env
+      ? r.related.map((d) => {
+          const now = d.key ? env.lookup(d.key) : undefined;
+          return now ? { name: now.name, start: now.start, end: now.end, key: now.key } : d;
+        })
+      : r.related,
+  }));
+}
+
 /** Builds a checker from its parts. */
 export function createChecker(parts: CheckerParts = {}): Checker {
   const config = parts.config ?? defaultCheckerConfig;
   const log = parts.log ?? (() => undefined);
+  const cache = new Map<string, CachedVerdicts>();
 
   function checkDocument(text: string, language: DocumentLanguage, options: CheckOptions = {}): CheckedDocument {
     const isCancelled = options.isCancelled ?? (() => false);
@@ -71,7 +127,21 @@ export function createChecker(parts: CheckerParts = {}): Checker {
     for (const { statement, region } of statements) {
       let results: ClaimResult[];
       try {
-        results = processStatement(statement, ctx);
+        const key = statementKey(statement, text, env, ctx.state);
+        const cached = cache.get(key);
+        if (cached) {
+          // Bind its definitions (and carry the chain state) without deciding anything again.
+          processStatement(statement, { ...ctx, definitionsOnly: true });
+          results = shift(cached.results, statement.start, env);
+          cache.delete(key);
+          cache.set(key, cached);
+        } else {
+          results = processStatement(statement, ctx);
+          if (!isCancelled() && !results.some((r) => r.code === 'unchecked.budget' || r.code === 'unchecked.internal')) {
+            cache.set(key, { results: shift(results, -statement.start) });
+            if (cache.size > CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
+          }
+        }
       } catch (error) {
         // A bug must not cost the user the rest of the document: report it as unchecked.
         log(`internal error while checking "${text.slice(statement.start, statement.end)}": ${(error as Error).stack ?? error}`);

@@ -41,7 +41,7 @@ function evalContext(ctx: StatementContext, budget: Budget): EvalContext {
 }
 
 function related(ec: EvalContext): DefinitionRef[] {
-  return ec.used.map((d) => ({ name: d.name, start: d.start, end: d.end }));
+  return ec.used.map((d) => ({ name: d.name, start: d.start, end: d.end, key: d.key }));
 }
 
 function unwrap(e: Expr): Expr {

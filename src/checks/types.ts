@@ -18,6 +18,8 @@ export interface DefinitionRef {
   readonly name: string;
   readonly start: number;
   readonly end: number;
+  /** The name's canonical key (`A_{1}` for `A_1`). */
+  readonly key?: string;
 }
 
 /** The verdict on one recognised claim. */
