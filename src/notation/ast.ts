@@ -80,7 +80,7 @@ export interface FractionExpr extends Span {
 }
 
 /** A decoration on a name, outermost first in `SymbolExpr.decorations`. */
-export type Decoration = 'hat' | 'tilde' | 'bar' | 'dot' | 'vec' | 'check';
+export type Decoration = 'hat' | 'tilde' | 'bar' | 'dot' | 'ddot' | 'vec' | 'check';
 
 /**
  * A name (SPEC §3): one Latin or Greek letter with optional decorations, primes and subscript.

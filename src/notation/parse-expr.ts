@@ -60,17 +60,31 @@ export function parseSum(c: Cursor): Expr {
 }
 
 /**
+ * Whether a product is the argument of an operator written without parentheses: `true` for
+ * any operator, `'scalar'` for cos, sin, cosh, sinh, ln, log, whose argument also stops before
+ * an identity or a matrix literal (`\cos 3t \, I` is cos(3t)·I, as engineers write it).
+ */
+export type OperatorArgument = boolean | 'scalar';
+
+/** True at `I`, `I_n` or a matrix literal. */
+function matrixAt(c: Cursor, ahead: number): boolean {
+  const t = c.peek(ahead);
+  return (t.type === 'letter' && t.value === 'I') || t.type === 'begin';
+}
+
+/**
  * Products: juxtaposition, `\cdot`, `\times`, `*`, and `a/b`. With `operatorArgument` set the
  * product is the argument of an operator written without parentheses, so it stops before the
  * next operator name (`\det A \det B` is det(A)·det(B)).
  */
-export function parseProduct(c: Cursor, operatorArgument: boolean): Expr {
+export function parseProduct(c: Cursor, operatorArgument: OperatorArgument): Expr {
   let left = parseSigned(c, operatorArgument);
+  const stopsAt = (ahead: number) => operatorArgument !== false && (argumentStopAt(c, ahead) || (operatorArgument === 'scalar' && matrixAt(c, ahead)));
   for (;;) {
     const before = c.pos;
     const t = c.peek();
     if (c.is('\\cdot') || c.is('\\times') || c.is('*') || c.is('\\ast')) {
-      if (operatorArgument && argumentStopAt(c, 1)) return left;
+      if (stopsAt(1)) return left;
       c.next();
       const right = parseSigned(c, operatorArgument);
       const operator: ProductOperator = t.value === '\\ast' ? '*' : (t.value as ProductOperator);
@@ -79,7 +93,7 @@ export function parseProduct(c: Cursor, operatorArgument: boolean): Expr {
       c.next();
       const right = parsePostfix(c);
       left = { kind: 'fraction', numerator: left, denominator: right, form: 'slash', start: left.start, end: right.end };
-    } else if (startsPrimary(c, 0) && !(operatorArgument && argumentStopAt(c, 0))) {
+    } else if (startsPrimary(c, 0) && !stopsAt(0)) {
       const right = parsePostfix(c);
       left = { kind: 'multiply', left, right, operator: 'juxtaposition', start: left.start, end: right.end };
     } else {
@@ -90,7 +104,7 @@ export function parseProduct(c: Cursor, operatorArgument: boolean): Expr {
 }
 
 /** A factor with any number of leading signs (`-A`, `\cdot -B`), built without recursion. */
-export function parseSigned(c: Cursor, operatorArgument = false): Expr {
+export function parseSigned(c: Cursor, operatorArgument: OperatorArgument = false): Expr {
   const signs: { sign: '-' | '+'; start: number }[] = [];
   while (c.is('-') || c.is('+')) {
     const t = c.next();
@@ -109,7 +123,7 @@ export function parsePostfix(c: Cursor): Expr {
   for (;;) {
     if (c.is('^')) {
       c.next();
-      const script = parseScriptArgument(c);
+      const script = parseScriptArgument(c, true);
       e = interpretSuperscript(e, script, c);
     } else if (c.is('!') && e.kind !== 'error') {
       c.next();

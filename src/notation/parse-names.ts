@@ -5,7 +5,7 @@
  */
 import type { Decoration, Expr, FunctionName, SymbolExpr } from './ast';
 import { Cursor, wordAfter } from './cursor';
-import { parseDelimitedArguments, startsDelimitedArguments } from './parse-primary';
+import { looksLikeMatrix, parseDelimitedArguments, startsDelimitedArguments } from './parse-primary';
 import { canonicalScriptText, symbolKey } from './symbols';
 import { parseNumber } from './parse-primary';
 import { parseScriptArgument, primeScriptAt, type ScriptArgument } from './parse-scripts';
@@ -181,11 +181,13 @@ function reserved(c: Cursor, start: number, core: NameCore, primes: number, sub:
   if (plain && sub) {
     const subExpr = sub.script.expr;
     const parens = startsDelimitedArguments(c);
-    if (core.base === '\\chi' && subExpr.kind === 'symbol') {
+    // `\chi_{A - BK}`, `\chi_{A^{T}}`: any matrix expression may stand in the subscript.
+    const matrixLike = subExpr.kind !== 'number' && subExpr.kind !== 'error' && subExpr.kind !== 'list';
+    if (core.base === '\\chi' && matrixLike) {
       if (parens) return applyWithArguments(c, start, 'charpoly', '\\chi', subExpr);
       return { kind: 'apply', func: 'charpoly', name: '\\chi', args: [], subscript: subExpr, nameSuperscript: null, delimiters: null, start, end };
     }
-    if (parens && ((core.base === '\\mu' && subExpr.kind === 'symbol') || ((core.base === 'p' || core.base === 'm') && isUpperCaseName(subExpr)))) {
+    if (parens && ((core.base === '\\mu' && matrixLike) || ((core.base === 'p' || core.base === 'm') && looksLikeMatrix(subExpr)))) {
       const func: FunctionName = core.base === 'p' ? 'charpoly' : 'minpoly';
       return applyWithArguments(c, start, func, core.base, subExpr);
     }

@@ -10,6 +10,9 @@ import { parseDelimitedArguments, startsDelimitedArguments, startsPrimary } from
 import { parseScriptArgument } from './parse-scripts';
 import { operatorCommands, operatorWords } from './vocabulary';
 
+/** Functions of a scalar: a paren-less argument stops before `I` or a matrix literal. */
+const scalarFunctions: ReadonlySet<FunctionName> = new Set(['cos', 'sin', 'cosh', 'sinh', 'ln', 'log']);
+
 /** Operators whose parenthesised argument may carry a power: `\operatorname{rank}(A - I)^2`. */
 const powerReadsInside: ReadonlySet<FunctionName> = new Set(['rank', 'nullity', 'kernel', 'dim']);
 
@@ -76,7 +79,7 @@ export function parseOperator(c: Cursor): Expr {
     args = parsed.args;
     delimiters = parsed.delimiters;
   } else if (startsPrimary(c, 0) || c.is('-') || c.is('+')) {
-    args = [parseProduct(c, true)];
+    args = [parseProduct(c, scalarFunctions.has(func) ? 'scalar' : true)];
   } else {
     args = [c.missing(`an argument for ${name}`)];
   }

@@ -251,8 +251,8 @@ export function parseDelimited(c: Cursor): Expr {
   return { kind: 'tuple', elements: items, delimiters, start, end };
 }
 
-/** `|X|` means det when X is built from matrix-like names or literals (upper-case letters). */
-function looksLikeMatrix(e: Expr): boolean {
+/** True when X is built from matrix-like names or literals (upper-case letters): `|X|` is then det. */
+export function looksLikeMatrix(e: Expr): boolean {
   switch (e.kind) {
     case 'symbol':
     case 'identity':

@@ -72,9 +72,10 @@ export function primeScriptAt(c: Cursor, ahead: number): { primes: number; lengt
 
 /**
  * Parses the argument after `^`/`_`/`\frac`: a braced group (any expression, commas make a
- * list) or one token. Never consumes past the group; reports a missing argument.
+ * list) or one token. Never consumes past the group; reports a missing argument. Only a
+ * `superscript` is checked for T, H, * (transpose marks); in `\chi_T` the T is a name.
  */
-export function parseScriptArgument(c: Cursor): ScriptArgument {
+export function parseScriptArgument(c: Cursor, superscript = false): ScriptArgument {
   const first = c.peek();
   if (c.is('{')) {
     // Scripts nest like groups (`x^{x^{…}}`), so they pass the same depth guard.
@@ -83,17 +84,17 @@ export function parseScriptArgument(c: Cursor): ScriptArgument {
       return { expr: skipped, braced: true, start: skipped.start, end: skipped.end, special: null };
     }
     try {
-      return parseBracedScript(c, first);
+      return parseBracedScript(c, first, superscript);
     } finally {
       c.leave();
     }
   }
-  return parseSingleScript(c, first);
+  return parseSingleScript(c, first, superscript);
 }
 
-function parseBracedScript(c: Cursor, first: Token): ScriptArgument {
+function parseBracedScript(c: Cursor, first: Token, superscript: boolean): ScriptArgument {
   {
-    const len = shortGroupLength(c, 0, 4);
+    const len = superscript ? shortGroupLength(c, 0, 4) : -1;
     if (len > 2) {
       const special = classifySpecial(c, 1, len - 2);
       if (special) {
@@ -114,9 +115,9 @@ function parseBracedScript(c: Cursor, first: Token): ScriptArgument {
   }
 }
 
-function parseSingleScript(c: Cursor, first: Token): ScriptArgument {
+function parseSingleScript(c: Cursor, first: Token, superscript: boolean): ScriptArgument {
   // One token (or one command with its own arguments).
-  for (const count of [4, 2, 1]) {
+  for (const count of superscript ? [4, 2, 1] : []) {
     const special = classifySpecial(c, 0, count);
     if (special && (count !== 4 || c.is('{', 1)) && (count !== 2 || c.peek(0).type === 'command' || c.peek(0).type === 'text')) {
       for (let k = 0; k < count; k++) c.next();
@@ -126,7 +127,7 @@ function parseSingleScript(c: Cursor, first: Token): ScriptArgument {
   if (first.type === 'char' && (first.value === '-' || first.value === '+') && (c.peek(1).type === 'digit' || c.peek(1).type === 'letter')) {
     // `A^-1` shows as A⁻ followed by 1: read what was meant, but say how to write it.
     c.next();
-    const operand = parseSingleScript(c, c.peek());
+    const operand = parseSingleScript(c, c.peek(), false);
     c.report('notation.script-braces', `a signed exponent needs braces: write ^{${first.value}${c.tokens[c.pos - 1]!.value}}`, { start: first.start, end: operand.end });
     const expr: Expr = { kind: 'negate', operand: operand.expr, sign: first.value as '-' | '+', start: first.start, end: operand.end };
     return { expr, braced: false, start: first.start, end: operand.end, special: null };

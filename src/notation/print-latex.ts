@@ -156,7 +156,7 @@ class LatexPrinter {
 
   private product(left: Expr, right: Expr, operator: string): string {
     // A paren-less operator followed by more product would swallow it on reading back.
-    const l = left.kind === 'apply' && !left.delimiters && levelOf(left) === Level.Product && !startsWithOperator(right)
+    const l = left.kind === 'apply' && !left.delimiters && levelOf(left) === Level.Product && !startsWithOperator(right) && !(scalarFunction(left) && startsWithMatrix(right))
       ? this.apply(left, true)
       : this.print(left, Level.Product);
     if (operator === 'juxtaposition') {
@@ -214,6 +214,24 @@ class LatexPrinter {
       return `${delimiters.sizedOpen ?? ''}${delimiters.open}${formatMatrixLatex(rows, env)}${delimiters.sizedClose ?? ''}${delimiters.close}`;
     }
     return formatMatrixLatex(rows, env, delimiters);
+  }
+}
+
+function scalarFunction(e: ApplyExpr): boolean {
+  return e.func === 'cos' || e.func === 'sin' || e.func === 'cosh' || e.func === 'sinh' || e.func === 'ln' || e.func === 'log';
+}
+
+/** True when `e` is written starting with `I` or a matrix literal (where a scalar function's argument stops). */
+function startsWithMatrix(e: Expr): boolean {
+  let x: Expr = e;
+  for (;;) {
+    if (x.kind === 'identity') return true;
+    if (x.kind === 'matrix') return x.delimiters === null;
+    if (x.kind === 'apply' && x.name === 'vmatrix') return true;
+    if (x.kind === 'multiply' || x.kind === 'add' || x.kind === 'subtract') x = x.left;
+    else if (x.kind === 'power' || x.kind === 'factorial') x = x.kind === 'power' ? x.base : x.operand;
+    else if (x.kind === 'transpose' || x.kind === 'conjugateTranspose') x = x.operand;
+    else return false;
   }
 }
 

@@ -54,7 +54,7 @@ function plainLetters(latex: string): string {
 }
 
 const superscriptDigits: Record<string, string> = { '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹', '-': '⁻' };
-const decorationMarks: Record<string, string> = { hat: '\u0302', tilde: '\u0303', bar: '\u0304', dot: '\u0307', vec: '\u20d7', check: '\u030c' };
+const decorationMarks: Record<string, string> = { hat: '\u0302', tilde: '\u0303', bar: '\u0304', dot: '\u0307', ddot: '\u0308', vec: '\u20d7', check: '\u030c' };
 
 /** Binding strength, as in the LaTeX printer. */
 function levelOf(e: Expr): number {

@@ -11,6 +11,7 @@ const decorationCommand: Record<Decoration, string> = {
   tilde: '\\tilde',
   bar: '\\bar',
   dot: '\\dot',
+  ddot: '\\ddot',
   vec: '\\vec',
   check: '\\check',
 };

@@ -2,7 +2,7 @@
  * The words of the notation: Greek letters, relation symbols, operator names, spacing and
  * ignorable commands. Kept as plain tables so the tokenizer, splitter and parser agree.
  */
-import type { FunctionName, RelationKind } from './ast';
+import type { Decoration, FunctionName, RelationKind } from './ast';
 
 const greekNames = [
   'alpha', 'beta', 'gamma', 'delta', 'epsilon', 'varepsilon', 'zeta', 'eta', 'theta', 'vartheta',
@@ -110,10 +110,11 @@ export const transparentFonts: ReadonlySet<string> = new Set([
 export const distinctFonts: ReadonlySet<string> = new Set(['\\mathcal', '\\mathbb', '\\mathfrak', '\\mathscr']);
 
 /** Decoration commands over a name. */
-export const decorationCommands: ReadonlyMap<string, 'hat' | 'tilde' | 'bar' | 'dot' | 'vec' | 'check'> = new Map([
+export const decorationCommands: ReadonlyMap<string, Decoration> = new Map<string, Decoration>([
   ['\\hat', 'hat'], ['\\widehat', 'hat'], ['\\tilde', 'tilde'], ['\\widetilde', 'tilde'],
-  ['\\bar', 'bar'], ['\\overline', 'bar'], ['\\dot', 'dot'], ['\\vec', 'vec'], ['\\check', 'check'],
-] as const);
+  ['\\bar', 'bar'], ['\\overline', 'bar'], ['\\dot', 'dot'], ['\\ddot', 'ddot'], ['\\vec', 'vec'],
+  ['\\check', 'check'],
+]);
 
 /** Ellipsis commands. */
 export const ellipsisCommands: ReadonlySet<string> = new Set(['\\cdots', '\\ldots', '\\vdots', '\\ddots', '\\dots', '\\dotsc', '\\dotsb']);

@@ -34,7 +34,7 @@ const roundTrips = [
   '\\left\\{ 1 \\pm \\sqrt{2} \\right\\}', 'X \\begin{pmatrix} 2 & 1 \\\\ 0 & 2 \\end{pmatrix} X^{-1}',
   '\\frac{1}{2}\\begin{pmatrix} 1 & -1 \\\\ 1 & 1 \\end{pmatrix}', '2 \\sin t', 'e^{-t}(\\cos t + \\sin t)',
   '\\sin^2 t', '(\\lambda - 2)^{2}(\\lambda + 1)', '\\lambda^3 - 6\\lambda^2 + 12\\lambda - 8',
-  '\\operatorname{rank}(A - I)^{2}', 'A \\otimes I + B', '\\bigl( A + B \\bigr) C', '\\| A \\|_2', '\\det(A)^2', '|A|^{2}', '\\sigma(A)_{1}', '2{3}', '\\cos t\\, e^{-t}', '\\det A \\operatorname{adj} B', '\\det A \\tan t', '\\det A \\dim\\ker B', '\\begin{pmatrix} \\cos t & -\\sin t \\\\ \\sin t & \\cos t \\end{pmatrix}',
+  '\\operatorname{rank}(A - I)^{2}', 'A \\otimes I + B', '\\bigl( A + B \\bigr) C', '\\| A \\|_2', '\\det(A)^2', '|A|^{2}', '\\sigma(A)_{1}', '2{3}', '\\cos t\\, e^{-t}', '\\det A \\operatorname{adj} B', '\\det A \\tan t', '\\det A \\dim\\ker B', '\\cos 3t \\, I', '\\cos t \\cdot I', '\\sin t \\begin{pmatrix} 1 \\end{pmatrix}', '\\chi_{A - BK}(s)', 'M\\ddot{q}', '\\begin{pmatrix} \\cos t & -\\sin t \\\\ \\sin t & \\cos t \\end{pmatrix}',
 ];
 
 test('parse → print → parse gives the same tree', () => {
