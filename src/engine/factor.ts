@@ -71,6 +71,7 @@ interface PrimeChoice {
 function factorSquareFreeInt(f: IntPoly, budget: Budget): IntPoly[] {
   const n = f.length - 1;
   if (n <= 1) return [f];
+  if (n === 2) return factorQuadratic(f);
   const lc = f[n];
   let allowed = new Array<boolean>(n + 1).fill(true);
   let best: PrimeChoice | undefined;
@@ -117,6 +118,16 @@ function factorSquareFreeInt(f: IntPoly, budget: Budget): IntPoly[] {
   }
   const lifted = henselLift(f, modFactors, p, k, budget);
   return recombine(f, lifted, M, allowed, budget);
+}
+
+/** A quadratic ax² + bx + c splits over Q exactly when b² − 4ac is a square s²: (2ax + b − s)(2ax + b + s)/(4a). */
+function factorQuadratic(f: IntPoly): IntPoly[] {
+  const [c, b, a] = f;
+  const disc = b * b - 4n * a * c;
+  if (disc < 0n) return [f];
+  const s = ceilSqrt(disc);
+  if (s * s !== disc) return [f];
+  return [primitiveInt([b - s, 2n * a]), primitiveInt([b + s, 2n * a])];
 }
 
 function symmetric(x: bigint, M: bigint): bigint {
