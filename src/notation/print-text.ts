@@ -105,6 +105,7 @@ function bare(e: Expr): Box {
     case 'symbol': {
       let name = plainLetters(e.base);
       for (const d of e.decorations) name += decorationMarks[d] ?? '';
+      name = name.normalize('NFC'); // Â rather than A + combining circumflex where one exists
       name += "'".repeat(e.primes);
       if (e.subscript !== null) name += `_${plainLetters(e.subscript)}`;
       return line(name);
@@ -126,11 +127,13 @@ function bare(e: Expr): Box {
       return beside(printBox(e.left, 1), line(' ⊕ '), printBox(e.right, 2));
     case 'multiply': {
       const sep = e.operator === '\\cdot' ? '·' : e.operator === '\\times' ? '×' : e.operator === '*' ? '*' : '';
-      const left = printBox(e.left, 3);
+      // `(1/2)A`, not `1/2A` (which reads as 1/(2A)).
+      const left = e.left.kind === 'fraction' && sep === '' ? beside(line('('), printBox(e.left), line(')')) : printBox(e.left, 3);
       const right = printBox(e.right, 4);
       const l = left.lines[left.baseline] ?? '';
       const r = right.lines[right.baseline] ?? '';
-      let space = sep === '' && /[0-9]$/.test(l) && /^[0-9]/.test(r) ? '·' : sep;
+      // Digits side by side would merge (`e^(-1)1/2`): separate them with a dot.
+      let space = sep === '' && /^[0-9.]/.test(r) && l !== '' ? '·' : sep;
       // `2 sin(t)`, `2 det(A)`: a named function reads better with a space before it.
       if (space === '' && e.right.kind === 'apply' && /^[a-zA-Z]{2}/.test(r)) space = ' ';
       return beside(left, line(space), right);
@@ -143,7 +146,7 @@ function bare(e: Expr): Box {
     case 'transpose':
       return beside(printBox(e.operand, 5), line('ᵀ'));
     case 'conjugateTranspose':
-      return beside(printBox(e.operand, 5), line('ᴴ'));
+      return beside(printBox(e.operand, 5), line(e.notation === '*' || e.notation === '\\ast' ? '*' : 'ᴴ'));
     case 'sqrt': {
       const index = e.index ? text(e.index) : '';
       const mark = index === '' ? '√' : index === '3' ? '∛' : index === '4' ? '∜' : `${index}√`;
@@ -204,10 +207,14 @@ function apply(e: ApplyExpr): Box {
   if (e.name === '\\otimes' && e.args.length === 2) return beside(printBox(e.args[0]!, 1), line(' ⊗ '), printBox(e.args[1]!, 2));
   let head: string;
   if (e.func === 'charpoly' || e.func === 'minpoly' || e.func === 'jordanBlock') head = plainLetters(e.name);
+  else if (e.name.startsWith('\\dim')) head = 'dim ker';
   else head = functionNames[e.func] ?? plainLetters(e.name);
   if (e.nameSuperscript) head += `^${text(e.nameSuperscript, 5)}`;
   if (e.subscript) head += `_${text(e.subscript, 5)}`;
   if (e.func === 'charpoly' && e.args.length === 0) return line(head);
+  // `rank (A - I)²`: the argument brings its own parentheses.
+  const only = e.args.length === 1 ? e.args[0]! : null;
+  if (only && !e.delimiters && (only.kind === 'group' || (only.kind === 'power' && only.base.kind === 'group'))) return beside(line(`${head} `), printBox(only));
   const parts: Box[] = [line(`${head}(`)];
   e.args.forEach((a, k) => {
     if (k) parts.push(line(', '));

@@ -113,6 +113,18 @@ test('plain text prints scalar expressions on one line', () => {
     ['e^{At}', 'e^(At)'],
     ['J_2(3) \\oplus J_1(5)', 'J_2(3) ⊕ J_1(5)'],
     ['|A|', '|A|'],
+    ['\\operatorname{tr}\\hat{A}', 'tr(Â)'],
+    ['\\dim\\ker(K - I)', 'dim ker (K - I)'],
+    ['\\operatorname{rank}(A - I)^{2}', 'rank (A - I)²'],
+    ['A^{\\mathsf T}', 'Aᵀ'],
+    ['A^{*}', 'A*'],
+    ['A^{H}', 'Aᴴ'],
+    ['e^{-1}\\frac{1}{2}', 'e^(-1)(1/2)'], ['e^{-1} 2', 'e^(-1)·2'],
+    ['\\frac{1}{2}A', '(1/2)A'],
+    ['\\sqrt[3]{2}', '∛2'],
+    ['\\ell', 'ℓ'],
+    ['e \\cos 1', 'e cos(1)'],
+    ['\\begin{vmatrix} 1 & 2 \\\\ 3 & 4 \\end{vmatrix}', '│1  2│\n│3  4│'],
   ];
   for (const [source, plain] of cases) assert.equal(toPlainText(expr(source)), plain, source);
 });
