@@ -22,7 +22,7 @@ export interface NumberFieldElement {
  * they save (on dense_20 the projector entries have denominators of thousands of bits and the gcds
  * took 5.6 s of 7.4 s), so such elements stay unreduced; equality cross-multiplies.
  */
-const LAZY_BITS = 1024;
+const LAZY_BITS = 256;
 
 function normalise(num: bigint[], den: bigint): NumberFieldElement {
   if (den < 0n) {
@@ -109,7 +109,7 @@ export function eigenFieldFor(factor: Poly): EigenField<NumberFieldElement> {
     for (const c of columns) scale = (scale / gcdInt(scale, c.den)) * c.den;
     const m = Array.from({ length: d }, (_, i) => columns.map((c) => (c.num[i] * scale) / c.den));
     const y = solveFractionFree(m, Array.from({ length: d }, (_, i) => (i === 0 ? scale : 0n)));
-    return fromCoords(y);
+    return normalise(y.numerators, y.denominator);
   };
   const field: Field<NumberFieldElement> = Object.freeze({
     name: `Q(α), α a root of ${f.toString()}`,
@@ -146,9 +146,9 @@ export function eigenFieldFor(factor: Poly): EigenField<NumberFieldElement> {
 
 /**
  * Solves m·y = b for a non-singular integer matrix by Bareiss elimination (every intermediate is an
- * exact minor, so divisions are exact) followed by rational back substitution.
+ * exact minor, so divisions are exact) and integer back substitution: y = numerators / denominator.
  */
-export function solveFractionFree(m: bigint[][], b: bigint[]): Rational[] {
+export function solveFractionFree(m: bigint[][], b: bigint[]): { numerators: bigint[]; denominator: bigint } {
   const n = m.length;
   const a = m.map((row, i) => [...row, b[i]]);
   let prev = 1n;
@@ -163,11 +163,14 @@ export function solveFractionFree(m: bigint[][], b: bigint[]): Rational[] {
     }
     prev = a[k][k];
   }
-  const y: Rational[] = new Array(n);
+  // Back substitution on integers: with D the last Bareiss pivot (± det m), D·y is integral by
+  // Cramer's rule, so every division below is exact and no rational gcd is ever taken.
+  const D = a[n - 1][n - 1];
+  const scaled: bigint[] = new Array(n);
   for (let i = n - 1; i >= 0; i--) {
-    let s = Rational.fromInt(a[i][n]);
-    for (let j = i + 1; j < n; j++) if (a[i][j] !== 0n) s = s.sub(y[j].mul(Rational.fromInt(a[i][j])));
-    y[i] = s.div(Rational.fromInt(a[i][i]));
+    let acc = a[i][n] * D;
+    for (let j = i + 1; j < n; j++) if (a[i][j] !== 0n) acc -= a[i][j] * scaled[j];
+    scaled[i] = acc / a[i][i];
   }
-  return y;
+  return { numerators: scaled, denominator: D };
 }
