@@ -124,21 +124,22 @@ export function divExactInt(a: IntPoly, b: IntPoly): IntPoly | undefined {
 }
 
 /**
- * Pseudo-remainder: lc(b)^(deg a − deg b + 1) · a mod b, computed in Z[x]. The building block of
- * the primitive remainder sequence below.
+ * Pseudo-remainder prem(a, b) = lc(b)^(deg a − deg b + 1) · a mod b, computed in Z[x] (the exact
+ * power matters to the subresultant algorithm). For deg a < deg b it is a itself.
  */
 export function pseudoRemInt(a: IntPoly, b: IntPoly): IntPoly {
   const r = a.slice();
-  const lb = b[b.length - 1];
   const db = b.length - 1;
-  while (r.length >= b.length && r.length > 0) {
-    const k = r.length - b.length;
-    const top = r[r.length - 1];
-    for (let i = 0; i < r.length; i++) r[i] *= lb;
-    for (let j = 0; j <= db; j++) r[k + j] -= top * b[j];
-    trimInt(r);
+  if (r.length < b.length) return trimInt(r);
+  const lb = b[db];
+  for (let k = r.length - b.length; k >= 0; k--) {
+    const top = r[k + db];
+    for (let i = 0; i < k + db; i++) r[i] *= lb;
+    r[k + db] = 0n;
+    if (top !== 0n) for (let j = 0; j < db; j++) r[k + j] -= top * b[j];
   }
-  return r;
+  r.length = db;
+  return trimInt(r);
 }
 
 /** Small primes below 2^25 used for a quick coprimality test before the exact gcd. */
@@ -246,6 +247,47 @@ export function squareFreeInt(f: IntPoly): [IntPoly, number][] {
     d = subInt(c, derivInt(b));
   }
   return out;
+}
+
+/**
+ * Resultant over Z by the subresultant algorithm (H. Cohen, A Course in Computational Algebraic
+ * Number Theory, Algorithm 3.3.7): pseudo-remainders with the exact divisions that keep the
+ * coefficients at the size of the subresultants, no rational arithmetic.
+ */
+export function resultantInt(a: IntPoly, b: IntPoly): bigint {
+  if (a.length === 0 || b.length === 0) return 0n;
+  const ca = contentInt(a);
+  const cb = contentInt(b);
+  let A = a.map((c) => c / ca);
+  let B = b.map((c) => c / cb);
+  const t = ca ** BigInt(B.length - 1) * cb ** BigInt(A.length - 1);
+  let g = 1n;
+  let h = 1n;
+  let s = 1n;
+  if (A.length < B.length) {
+    [A, B] = [B, A];
+    if ((A.length - 1) % 2 === 1 && (B.length - 1) % 2 === 1) s = -1n;
+  }
+  for (;;) {
+    const dA = A.length - 1;
+    const dB = B.length - 1;
+    if (dB === 0) {
+      // h^(1 − deg A) · lc(B)^(deg A), an exact division for deg A ≥ 1.
+      const num = B[0] ** BigInt(dA);
+      const den = dA >= 1 ? h ** BigInt(dA - 1) : 1n;
+      return s * t * (num / den);
+    }
+    const delta = dA - dB;
+    if (dA % 2 === 1 && dB % 2 === 1) s = -s;
+    const R = pseudoRemInt(A, B);
+    if (R.length === 0) return 0n;
+    A = B;
+    const divisor = g * h ** BigInt(delta);
+    B = R.map((c) => c / divisor);
+    g = A[A.length - 1];
+    // h ← g^δ / h^(δ − 1), exact.
+    h = delta === 0 ? h : g ** BigInt(delta) / h ** BigInt(delta - 1);
+  }
 }
 
 /** a(x + 1) by the O(n²) Taylor shift (the step of Descartes-rule root isolation). */

@@ -5,7 +5,7 @@
  */
 import { Rational, gcdInt as gcdInteger } from './rational';
 import { DomainError } from './errors';
-import { type IntPoly, gcdIntPoly, squareFreeInt, trimInt } from './intpoly';
+import { type IntPoly, gcdIntPoly, resultantInt, squareFreeInt, trimInt } from './intpoly';
 
 function lcmInt(a: bigint, b: bigint): bigint {
   return (a / gcdInteger(a, b)) * b;
@@ -290,22 +290,14 @@ export function squareFreePart(p: Poly): Poly {
 }
 
 /**
- * The resultant Res(a, b) = lc(a)^deg b · ∏ b(α) over the roots α of a, by the Euclidean
- * recurrence Res(a, b) = (−1)^(mn) lc(b)^(m − deg r) Res(b, r) with r = a mod b.
+ * The resultant Res(a, b) = lc(a)^deg b · ∏ b(α) over the roots α of a. Denominators are cleared
+ * (Res(a/d, b/e) = Res(a, b) / (d^deg b · e^deg a)) and the integer resultant comes from the
+ * subresultant algorithm, which avoids rational normalisation in every remainder step.
  */
 export function resultant(a: Poly, b: Poly): Rational {
   if (a.isZero() || b.isZero()) return Rational.ZERO;
-  let result = Rational.ONE;
-  let [x, y] = [a, b];
-  for (;;) {
-    const m = x.degree();
-    const n = y.degree();
-    if (n === 0) return result.mul(y.leading().pow(m));
-    if (m === 0) return result.mul(x.leading().pow(n));
-    const r = x.mod(y);
-    if (r.isZero()) return Rational.ZERO;
-    if ((m * n) % 2 === 1) result = result.neg();
-    result = result.mul(y.leading().pow(m - r.degree()));
-    [x, y] = [y, r];
-  }
+  const x = a.toIntegersClearingDenominators();
+  const y = b.toIntegersClearingDenominators();
+  const r = resultantInt(trimInt(x.coeffs), trimInt(y.coeffs));
+  return Rational.of(r, x.denominator ** BigInt(b.degree()) * y.denominator ** BigInt(a.degree()));
 }

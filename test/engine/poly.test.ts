@@ -98,3 +98,21 @@ test('printing in a caller-named variable', () => {
   assert.equal(Poly.zero().toString(), '0');
   assert.equal(Poly.x().toString('s'), 's');
 });
+
+test('resultants of random pairs match the product formula lc(a)^deg b · ∏ b(r_i)', () => {
+  // Res(a, b) = lc(a)^deg b ∏_{a(r)=0} b(r) (the definition over the roots; common practice), with
+  // a built from known rational roots; also Res(b, a) = (−1)^(deg a·deg b) Res(a, b).
+  let s = 77;
+  const rnd = (k: number) => ((s = (Math.imul(s, 1103515245) + 12345) >>> 0) % k);
+  for (let k = 0; k < 60; k++) {
+    const roots = Array.from({ length: 1 + rnd(5) }, () => q(rnd(21) - 10, 1 + rnd(4)));
+    const lead = q(rnd(9) + 1, 1 + rnd(3)).mul(q(rnd(2) ? 1 : -1));
+    const a = Poly.fromRoots(roots).scale(lead);
+    const b = Poly.fromRationals(Array.from({ length: 1 + rnd(7) }, () => q(rnd(41) - 20, 1 + rnd(5))));
+    if (b.isZero()) continue;
+    const expected = roots.reduce((acc, r) => acc.mul(b.eval(r)), lead.pow(b.degree()));
+    assert.ok(resultant(a, b).equals(expected), `case ${k}: Res(${a}, ${b})`);
+    const sign = (a.degree() * b.degree()) % 2 === 0 ? 1 : -1;
+    assert.ok(resultant(b, a).equals(expected.mul(q(sign))), `case ${k}: swapped`);
+  }
+});
