@@ -11,7 +11,7 @@ import assert from 'node:assert/strict';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { after, before, describe, it } from 'node:test';
-import { assertBuilt, lineColumn, offsetOf, ROOT, runCli, tempFolder } from './helpers';
+import { assertBuilt, lineColumn, offsetOf, ROOT, runCli, runCliAsync, tempFolder } from './helpers';
 
 // K = [[3, 1], [2, 4]]: det 10, trace 7, rank 2. M = diag(2, 3, 5): det 30. Q is never defined.
 // Non-ASCII text (é, ü, —) stands before claims on the same line, so columns are tested past it.
@@ -202,10 +202,9 @@ describe('check text format and exit status', () => {
     assert.match(strict.stdout, /^open\.md:3:\d+: unchecked: /m);
   });
 
-  it('exits 1 when a claim fails, in any format', () => {
-    for (const format of ['text', 'json', 'sarif']) {
-      assert.equal(runCli(['check', '--format', format, 'fans.tex'], dir).status, 1, format);
-    }
+  it('exits 1 when a claim fails, in any format', async () => {
+    const runs = await Promise.all(['text', 'json', 'sarif'].map((format) => runCliAsync(['check', '--format', format, 'fans.tex'], dir)));
+    runs.forEach((run, i) => assert.equal(run.status, 1, ['text', 'json', 'sarif'][i]));
   });
 
   it('exits 2 with a message naming a missing path, even when other notes are fine', () => {
@@ -214,13 +213,15 @@ describe('check text format and exit status', () => {
     assert.match(run.stderr, /no-such-note\.md/);
   });
 
-  it('exits 2 on a bad --format, an unknown option, an unknown command, and a file that is not a note', () => {
-    for (const args of [['check', '--format', 'xml', 'true.md'], ['check', '--frobnicate', 'true.md'], ['inspect', 'true.md'], ['check', 'notes.txt']]) {
-      const run = runCli(args, dir);
-      assert.equal(run.status, 2, args.join(' '));
-      assert.ok(run.stderr.trim().length > 0, `a message for ${args.join(' ')}`);
+  it('exits 2 on a bad --format, an unknown option, an unknown command, and a file that is not a note', async () => {
+    const cases = [['check', '--format', 'xml', 'true.md'], ['check', '--frobnicate', 'true.md'], ['inspect', 'true.md'], ['check', 'notes.txt']];
+    const runs = await Promise.all(cases.map((args) => runCliAsync(args, dir)));
+    runs.forEach((run, i) => {
+      const args = cases[i].join(' ');
+      assert.equal(run.status, 2, args);
+      assert.ok(run.stderr.trim().length > 0, `a message for ${args}`);
       assert.doesNotMatch(run.stderr, /internal error|at .*\.js:\d+/, 'a usage message, not a stack trace');
-    }
-    assert.match(runCli(['check', '--format', 'xml', 'true.md'], dir).stderr, /--format/);
+    });
+    assert.match(runs[0].stderr, /--format/);
   });
 });

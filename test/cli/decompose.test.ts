@@ -13,7 +13,7 @@
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { before, describe, it } from 'node:test';
-import { assertBuilt, ROOT, runCli } from './helpers';
+import { assertBuilt, ROOT, runCli, runCliAsync } from './helpers';
 
 const MATRICES: Record<string, number[][]> = {
   'J_2(4)': [
@@ -121,10 +121,11 @@ print(json.dumps(out))
 describe('decompose', () => {
   before(() => assertBuilt());
 
-  it('agrees with SymPy on det, trace, rank, characteristic polynomial and Jordan structure (JSON)', () => {
+  it('agrees with SymPy on det, trace, rank, characteristic polynomial and Jordan structure (JSON)', async () => {
     const names = Object.keys(MATRICES);
-    const cases = names.map((name) => {
-      const run = runCli(['decompose', '--format', 'json', JSON.stringify(MATRICES[name])], ROOT);
+    const runs = await Promise.all(names.map((name) => runCliAsync(['decompose', '--format', 'json', JSON.stringify(MATRICES[name])], ROOT)));
+    const cases = names.map((name, i) => {
+      const run = runs[i];
       assert.equal(run.status, 0, `${name}: ${run.stderr}`);
       const answer = JSON.parse(run.stdout) as DecomposeJson;
       assert.equal(answer.rows, MATRICES[name].length);
@@ -180,7 +181,7 @@ describe('decompose', () => {
     );
   });
 
-  it('exits 2 with a clear message, no stack trace, on bad input', () => {
+  it('exits 2 with a clear message, no stack trace, on bad input', async () => {
     const cases: [args: string[], stdin: string, message: RegExp][] = [
       [['decompose', '[[1, 2], [3]]'], '', /different numbers of entries/],
       [['decompose', '[[1, 2], [3, 4]'], '', /column \d+/],
@@ -189,11 +190,12 @@ describe('decompose', () => {
       [['decompose', '[[1]]', '[[2]]'], '', /exactly one MATRIX/],
       [['decompose', '--format', 'svg', '[[1]]'], '', /--format/],
     ];
-    for (const [args, stdin, message] of cases) {
-      const run = runCli(args, ROOT, stdin);
+    const runs = await Promise.all(cases.map(([args, stdin]) => runCliAsync(args, ROOT, stdin)));
+    cases.forEach(([args, , message], i) => {
+      const run = runs[i];
       assert.equal(run.status, 2, `${args.join(' ')}: ${run.stdout}${run.stderr}`);
       assert.match(run.stderr, message, args.join(' '));
       assert.doesNotMatch(run.stderr, /internal error|\n\s+at /, 'no stack trace');
-    }
+    });
   });
 });

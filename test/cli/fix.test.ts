@@ -102,11 +102,11 @@ describe('check --fix', () => {
 describe('check --fix killed while it writes', () => {
   let dir: string;
   let remove: () => void;
-  // A large note (~1 MB): 30 stale claims between long logs in code blocks, so writing the fixed
+  // A large note (~0.7 MB): 30 stale claims between long logs in code blocks, so writing the fixed
   // file takes a while and a kill can land in the middle of it.
   const logLine = 'pump-skid log: impeller A 1480 rpm, impeller B 1475 rpm, coupling torque 212 N m, bearing 41 °C\n';
   let template = '$$A = \\begin{pmatrix} 2 & 1 \\\\ 1 & 3 \\end{pmatrix}$$\n\n';
-  for (let i = 0; i < 30; i++) template += `Reading ${i}: $\\det A = «7→5»$.\n\n\`\`\`text\n${logLine.repeat(300)}\`\`\`\n\n`;
+  for (let i = 0; i < 30; i++) template += `Reading ${i}: $\\det A = «7→5»$.\n\n\`\`\`text\n${logLine.repeat(220)}\`\`\`\n\n`;
   const note = staleAndFixed(template);
   const oldBytes = Buffer.from(note.before, 'utf8');
   const newBytes = Buffer.from(note.after, 'utf8');

@@ -36,16 +36,17 @@ export function runCli(args: readonly string[], cwd: string, input?: string): Cl
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
 
-/** Runs the command line asynchronously (for the tests that start several at once). */
-export function runCliAsync(args: readonly string[], cwd: string): Promise<CliRun> {
+/** Runs the command line asynchronously (for tests that start several at once). */
+export function runCliAsync(args: readonly string[], cwd: string, input = ''): Promise<CliRun> {
   return new Promise((resolvePromise, reject) => {
-    const child = spawn(process.execPath, [CLI, ...args], { cwd, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, [CLI, ...args], { cwd, stdio: ['pipe', 'pipe', 'pipe'] });
     let stdout = '';
     let stderr = '';
     child.stdout.setEncoding('utf8').on('data', (d: string) => (stdout += d));
     child.stderr.setEncoding('utf8').on('data', (d: string) => (stderr += d));
     child.on('error', reject);
     child.on('close', (status) => resolvePromise({ status, stdout, stderr }));
+    child.stdin.end(input);
   });
 }
 
