@@ -4,7 +4,7 @@
  * Continuous: asymptotically stable iff every Re λ < 0; marginally stable iff every Re λ ≤ 0 and
  * each eigenvalue with Re λ = 0 has only 1×1 Jordan blocks; unstable otherwise. Discrete: the same
  * with |λ| against 1. (Standard; e.g. C.-T. Chen, Linear System Theory and Design, 3rd ed., 1999,
- * Theorems 5.1 and 5.D1.) The position of each eigenvalue is decided exactly by the algebraic
+ * chapter 5, recalled from memory.) The position of each eigenvalue is decided exactly by the algebraic
  * numbers' sign of the real part and comparison of |λ| with 1, boundary cases included.
  */
 import { AlgebraicNumber } from './algebraic';
