@@ -251,4 +251,19 @@ describe('language server over stdio (settings pushed by the client)', () => {
     assert.equal(session.child.exitCode, null, `the server is still running: ${session.stderr.join('')}`);
     await session.close(uri);
   });
+
+  it('points related information at every definition a claim uses', async () => {
+    // det(AB) = det A · det B = 6 · 4 = 24 (by hand; common practice, no source).
+    const text = '$$A = \\begin{pmatrix} 0 & 1 \\\\ -6 & -5 \\end{pmatrix}$$\n\n```notary\nB = [[2, 1], [0, 2]]\n\\det (AB) = 25\n```\n';
+    const uri = 'file:///notes/product.md';
+    await session.open(uri, 'markdown', text);
+    const [diagnostic] = await session.diagnosticsFor(uri, 1);
+    assert.equal(diagnostic.code, 'det.mismatch');
+    assert.match(textOf(diagnostic), /\b24\b/);
+    assert.deepEqual(diagnostic.relatedInformation?.map((r) => [r.location.uri, r.location.range.start.line]).sort(), [
+      [uri, 0],
+      [uri, 3],
+    ]);
+    await session.close(uri);
+  });
 });
