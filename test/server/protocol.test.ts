@@ -266,4 +266,32 @@ describe('language server over stdio (settings pushed by the client)', () => {
     ]);
     await session.close(uri);
   });
+
+  it('hovers with the spectrum, e^{At}, the stability notion from the settings, the caution and a panel link', async () => {
+    // A = [[0, 1], [−6, −5]]: χ(λ) = λ² + 5λ + 6 = (λ + 2)(λ + 3), so eigenvalues −2 and −3, each
+    // simple; continuous time: asymptotically stable (Re λ < 0); discrete time: unstable (|λ| > 1).
+    // Common practice, no source.
+    const uri = 'file:///notes/stability.md';
+    const text = '$$A = \\begin{pmatrix} 0 & 1 \\\\ -6 & -5 \\end{pmatrix}$$\n\nWe have $\\det A = 6$.\n';
+    await session.open(uri, 'markdown', text);
+    const at = positionOf(text, text.indexOf('\\det A') + '\\det '.length);
+    const value = async () => ((await session.hover(uri, at.line, at.character))!.contents as { value: string }).value;
+    const continuous = await value();
+    assert.match(continuous, /(^|\s)-2\b[^\n]*algebraic multiplicity 1\b[^\n]*geometric 1\b/m);
+    assert.match(continuous, /(^|\s)-3\b[^\n]*algebraic multiplicity 1\b[^\n]*geometric 1\b/m);
+    assert.match(continuous, /e\^\{?At\}?/);
+    assert.match(continuous, /continuous[^\n]*asymptotically stable/i);
+    assert.ok(continuous.includes('Designs that can hurt someone need review'), 'the caution accompanies stability and e^{At}');
+    const link = /\(command:matrixNotary\.showDecomposition\?([^)]+)\)/.exec(continuous);
+    assert.ok(link, 'a link that opens the side panel');
+    assert.deepEqual(JSON.parse(decodeURIComponent(link[1])), [{ uri, position: at }]);
+
+    await session.changeSettings({ stability: 'discrete' });
+    // Pushed settings are read when the notification is handled, and messages are handled in
+    // order, so the next hover sees them.
+    const discrete = await value();
+    assert.match(discrete, /discrete[^\n]*\bunstable\b/i);
+    await session.changeSettings({});
+    await session.close(uri);
+  });
 });
