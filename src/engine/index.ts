@@ -33,3 +33,5 @@ export * from './powers';
 export * from './stability';
 export * from './multivariate-gcd';
 export * from './disk';
+export * from './exponential-real';
+export * from './jordan-quadratic';
