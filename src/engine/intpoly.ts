@@ -6,6 +6,7 @@
  * Convention: a polynomial is a `bigint[]` without trailing zeros; the zero polynomial is `[]`.
  */
 import { gcdInt as gcdInteger } from './rational';
+import { gcdMod, reduceMod } from './polymodp';
 
 /** An integer polynomial, coefficients low → high, no trailing zeros. */
 export type IntPoly = bigint[];
@@ -145,52 +146,6 @@ export function pseudoRemInt(a: IntPoly, b: IntPoly): IntPoly {
 /** Small primes below 2^25 used for a quick coprimality test before the exact gcd. */
 const GCD_TEST_PRIMES = [33554393, 33554383, 33554371];
 
-function reduceModP(a: IntPoly, p: number): number[] {
-  const P = BigInt(p);
-  const out = a.map((c) => {
-    const r = Number(c % P);
-    return r < 0 ? r + p : r;
-  });
-  let n = out.length;
-  while (n > 0 && out[n - 1] === 0) n--;
-  out.length = n;
-  return out;
-}
-
-function mulModN(a: number, b: number, p: number): number {
-  // a, b < 2^25, so a·b < 2^50 is exact in a double.
-  return (a * b) % p;
-}
-
-function invModN(a: number, p: number): number {
-  let [r0, r1, s0, s1] = [a, p, 1, 0];
-  while (r1 !== 0) {
-    const q = Math.floor(r0 / r1);
-    [r0, r1] = [r1, r0 - q * r1];
-    [s0, s1] = [s1, s0 - q * s1];
-  }
-  return ((s0 % p) + p) % p;
-}
-
-/** Degree of gcd(a, b) modulo p (an upper bound for the degree over Q when p ∤ lc). */
-function gcdDegreeModP(a: IntPoly, b: IntPoly, p: number): number {
-  let x = reduceModP(a, p);
-  let y = reduceModP(b, p);
-  while (y.length > 0) {
-    const inv = invModN(y[y.length - 1], p);
-    while (x.length >= y.length) {
-      const c = mulModN(x[x.length - 1], inv, p);
-      const k = x.length - y.length;
-      for (let j = 0; j < y.length; j++) x[k + j] = (x[k + j] - mulModN(c, y[j], p) + p) % p;
-      let n = x.length;
-      while (n > 0 && x[n - 1] === 0) n--;
-      x.length = n;
-    }
-    [x, y] = [y, x];
-  }
-  return x.length - 1;
-}
-
 /**
  * gcd over Z: primitive, positive leading coefficient. A coprimality test modulo a prime first
  * (the common case — a square-free characteristic polynomial against its derivative — then costs
@@ -205,7 +160,7 @@ export function gcdIntPoly(a: IntPoly, b: IntPoly): IntPoly {
   for (const p of GCD_TEST_PRIMES) {
     const P = BigInt(p);
     if (a[a.length - 1] % P === 0n || b[b.length - 1] % P === 0n) continue;
-    if (gcdDegreeModP(a, b, p) === 0) return [1n];
+    if (gcdMod(reduceMod(a, p), reduceMod(b, p), p).length === 1) return [1n];
     break;
   }
   let x = primitiveInt(a);
