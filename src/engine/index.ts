@@ -35,3 +35,4 @@ export * from './multivariate-gcd';
 export * from './disk';
 export * from './exponential-real';
 export * from './jordan-quadratic';
+export * from './jordan-real';

@@ -11,6 +11,7 @@ import { blockSizesFromRanks } from '../../src/engine/jordan-chains';
 import { jordanChevalley, spectralProjectors } from '../../src/engine/chevalley';
 import { eigenFieldFor } from '../../src/engine/jordan-numberfield';
 import { factorOverQ } from '../../src/engine/factor';
+import { realJordanForm } from '../../src/engine/jordan-real';
 import { loadBenchMatrices, parseFactoredText } from './matrix-fixtures';
 
 const Q = (rows: (number | string)[][]) =>
@@ -135,4 +136,25 @@ test('spectral projectors from CRT idempotents sum to I and project onto ker f(A
 
 test('bad input: a non-square matrix is a typed error', () => {
   assert.throws(() => jordanForm(Q([[1, 2, 3], [4, 5, 6]])), (e: Error & { code?: string }) => e.code === 'engine.not-square');
+});
+
+test('real Jordan form: blocks [[a, −b], [b, a]] with identity couplings and a real X, verified (Horn & Johnson, Matrix Analysis, 2nd ed., 2013, §3.4.1)', () => {
+  // x″ + 2x′ + 5x = 0: eigenvalues −1 ± 2i, so J = [[−1, −2], [2, −1]] over Q.
+  const osc = realJordanForm(Q([[0, 1], [-5, -2]]));
+  assert.equal(osc.radicand, 1n);
+  assert.deepEqual(osc.J.toRows().map((r) => r.map(String)), [['-1', '-2'], ['2', '-1']]);
+  // Planted matrices with √2 and i (and 2×2 blocks on them at n = 10, 12): entries in Q(√2).
+  for (const name of ['planted_8', 'planted_10', 'planted_12']) {
+    const m = loadBenchMatrices().find((x) => x.name === name)!;
+    const a = Q(m.matrix);
+    const r = realJordanForm(a);
+    const R = r.field;
+    const aR = a.map(R.field, (x) => R.fromRational(x));
+    assert.ok(aR.mul(r.X).equals(r.X.mul(r.J)), `A·X = X·J for ${name}`);
+    assert.equal(r.radicand, 2n);
+    const pairs = r.blocks.filter((b) => b.kind === 'complex-pair');
+    assert.equal(pairs.length, 1, `one ±i pair in ${name}`);
+  }
+  // Two different square roots (√2 and √3) do not fit one real field.
+  assert.throws(() => realJordanForm(Q([[0, 2, 0, 0], [1, 0, 0, 0], [0, 0, 0, 3], [0, 0, 1, 0]])), (e: Error & { code?: string }) => e.code === 'engine.domain');
 });
