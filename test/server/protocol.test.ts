@@ -294,4 +294,32 @@ describe('language server over stdio (settings pushed by the client)', () => {
     await session.changeSettings({});
     await session.close(uri);
   });
+
+  it('answers matrixNotary/describe (panel and insert/copy commands) with sections and LaTeX', async () => {
+    const at = positionOf(MARKDOWN, MARKDOWN.indexOf('\\det A = 5') + '\\det '.length);
+    const description = await session.describe(MD_URI, at.line, at.character);
+    assert.ok(description, 'a description of A');
+    assert.equal(description.name, 'A');
+    const sections = description.sections as { title: string; latex?: string; text?: string }[];
+    assert.ok(sections.length > 0 && sections.every((s) => typeof s.title === 'string' && (s.latex !== undefined || s.text !== undefined)));
+    assert.match(String(description.matrixLatex), /\\begin\{pmatrix\}\s*0 & 1 \\\\ -6 & -5\s*\\end\{pmatrix\}/);
+    const prose = positionOf(MARKDOWN, MARKDOWN.indexOf('Winch'));
+    assert.equal(await session.describe(MD_URI, prose.line, prose.character), null);
+  });
+
+  it('sends the per-statement verdicts for the preview with each check', () => {
+    const first = session.verdicts.find((v) => v.uri === MD_URI && v.version === 1);
+    assert.ok(first, 'verdicts of the first version');
+    assert.deepEqual(
+      first.verdicts.map((v) => [v.text, v.verdict, v.line]),
+      [
+        ['\\det A = 5', 'fails', 4],
+        ['\\operatorname{tr} A = -5', 'holds', 4],
+        ['\\det Z = 2', 'unchecked', 4],
+        ['\\det A = 6', 'holds', 6],
+        ['\\det B = 4', 'holds', 10],
+        ['\\operatorname{tr} B = 5', 'fails', 11],
+      ],
+    );
+  });
 });

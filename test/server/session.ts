@@ -21,6 +21,7 @@ import {
   HoverRequest,
   InitializedNotification,
   InitializeRequest,
+  NotificationType,
   PublishDiagnosticsNotification,
   RegistrationRequest,
   ShutdownRequest,
@@ -36,6 +37,9 @@ import {
   type PublishDiagnosticsParams,
   type TextEdit,
 } from 'vscode-languageserver-protocol/node';
+
+/** The server's custom notification of per-statement verdicts (for the Markdown preview). */
+const VERDICTS = new NotificationType<ServerSession['verdicts'][number]>('matrixNotary/verdicts');
 
 /** The repository root and the bundled server (NOTARY_TEST_SERVER may point elsewhere, e.g. at a deliberately broken copy). */
 export const ROOT = resolve(__dirname, '..', '..');
@@ -83,6 +87,8 @@ async function waitFor<T>(what: string, deadlineMs: number, check: () => T | und
 export class ServerSession {
   /** Every publishDiagnostics notification, in arrival order. */
   readonly published: PublishDiagnosticsParams[] = [];
+  /** Every `matrixNotary/verdicts` notification (per-statement verdicts for the preview). */
+  readonly verdicts: { uri: string; version: number; verdicts: { text: string; verdict: string; message: string; line: number }[] }[] = [];
   /** Every workspace/configuration request the server sent. */
   readonly configurationRequests: unknown[] = [];
   readonly stderr: string[] = [];
@@ -108,6 +114,9 @@ export class ServerSession {
     const connection = createProtocolConnection(new StreamMessageReader(child.stdout), new StreamMessageWriter(child.stdin));
     const session = new ServerSession(child, connection, options);
     connection.onNotification(PublishDiagnosticsNotification.type, (params) => session.receive(params));
+    connection.onNotification(VERDICTS, (params) => {
+      session.verdicts.push(params);
+    });
     connection.onRequest(ConfigurationRequest.type, (params) => {
       session.configurationRequests.push(params);
       return params.items.map((item) => (item.section === 'matrixNotary' ? session.settings : null));
@@ -211,6 +220,11 @@ export class ServerSession {
   codeActions(uri: string, diagnostics: Diagnostic[], only?: string[]): Promise<(Command | CodeAction)[] | null> {
     const range = diagnostics[0]?.range ?? { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } };
     return this.connection.sendRequest(CodeActionRequest.type, { textDocument: { uri }, range, context: { diagnostics, ...(only ? { only } : {}) } });
+  }
+
+  /** The custom request behind the panel and the insert/copy commands. */
+  describe(uri: string, line: number, character: number): Promise<Record<string, unknown> | null> {
+    return this.connection.sendRequest('matrixNotary/describe', { uri, position: { line, character } });
   }
 
   codeLenses(uri: string): Promise<CodeLens[] | null> {
