@@ -36,3 +36,4 @@ export * from './disk';
 export * from './exponential-real';
 export * from './jordan-quadratic';
 export * from './jordan-real';
+export * from './jordan-claims';
