@@ -175,3 +175,25 @@ export function inverseFactorial(k: number): Rational {
   for (let i = 2n; i <= BigInt(k); i++) d *= i;
   return Rational.of(1n, d);
 }
+
+/** One term c·e^{λ} of a value at t = 1. */
+export interface ExpAtOneTerm<T> {
+  readonly coef: T;
+  readonly exponent: T;
+}
+
+/**
+ * The value at t = 1 as an exact combination Σ c·e^{λ} (e^{A} from e^{At}): powers of t become 1
+ * and terms with the same λ merge. For rational λ the e^{λ} are linearly independent over the
+ * algebraic numbers (Lindemann–Weierstrass), so the combination is a canonical exact form.
+ */
+export function valueAtOne<T>(p: ExpPolynomial<T>): ExpAtOneTerm<T>[] {
+  const F = p.field;
+  const out: { coef: T; exponent: T }[] = [];
+  for (const t of p.terms) {
+    const same = out.find((o) => F.equals(o.exponent, t.rate));
+    if (same) same.coef = F.add(same.coef, t.coef);
+    else out.push({ coef: t.coef, exponent: t.rate });
+  }
+  return out.filter((o) => !F.isZero(o.coef));
+}

@@ -119,3 +119,15 @@ export function columnsAtRoot(block: JordanFactorBlock, k: number): AlgebraicNum
     return root.polynomialIn(Poly.fromRationals(coords));
   }));
 }
+
+/** Block sizes per eigenvalue, one entry per root (conjugates listed separately, sharing sizes). */
+export interface EigenvalueBlocks {
+  readonly eigenvalue: AlgebraicNumber;
+  readonly factor: Poly;
+  readonly sizes: readonly number[];
+}
+
+/** The Jordan structure per eigenvalue, for comparing a user's J or `A \sim J` claim and for display. */
+export function eigenvalueBlocks(jd: JordanDecomposition): EigenvalueBlocks[] {
+  return jd.factors.flatMap((f) => factorRoots(f.factor).map((eigenvalue) => ({ eigenvalue, factor: f.factor, sizes: f.sizes })));
+}

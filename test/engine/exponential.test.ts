@@ -6,7 +6,7 @@ import { expm, matrix as mathMatrix } from 'mathjs';
 import { Matrix } from '../../src/engine/matrix';
 import { inverse, matrixPower } from '../../src/engine/matrix-elimination';
 import { QQ, Rational } from '../../src/engine/rational';
-import { ExpPolynomial } from '../../src/engine/exppoly';
+import { ExpPolynomial, valueAtOne } from '../../src/engine/exppoly';
 import { matrixExponential } from '../../src/engine/exponential';
 import { exponentialValueAt } from '../../src/engine/exponential-values';
 import { certifiedValue, encloseRational, midpoint, toDecimal } from '../../src/engine/exponential-numeric';
@@ -166,4 +166,11 @@ test('e^{At} of a singular matrix with a zero eigenvalue and of the empty matrix
   const e = rationalExp(Q([[0, 1], [0, 0]]));
   assert.ok(e[0][1].equals(ExpPolynomial.monomial(QQ, Rational.ONE, 1, QQ.zero)));
   assert.equal(matrixExponential(Matrix.fromRows(QQ, [])).n, 0);
+});
+
+test('e^{A} exactly for the Moler–Van Loan matrix: −2e^{−1} + 3e^{−17} in the corner, and t·e^{2t} from a 2×2 block gives e^{2} at t = 1', () => {
+  const e = rationalExp(Q([[-49, 24], [-64, 31]]));
+  assert.deepEqual(valueAtOne(e[0][0]).map((x) => `${x.coef}·e^${x.exponent}`), ['-2·e^-1', '3·e^-17']);
+  const block = rationalExp(Q([[2, 1], [0, 2]]));
+  assert.deepEqual(valueAtOne(block[0][1]).map((x) => `${x.coef}·e^${x.exponent}`), ['1·e^2']);
 });
