@@ -150,6 +150,8 @@ documents.onDidClose((e) => {
   const state = states.get(e.document.uri);
   state?.job?.cancel();
   if (state?.timer) clearTimeout(state.timer);
+  // Requests waiting for this document's result (code lenses) are answered now, not never.
+  state?.resolveReady?.();
   states.delete(e.document.uri);
   void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
 });
@@ -191,7 +193,10 @@ connection.onCodeLens(async (params) => {
   const document = documents.get(params.textDocument.uri);
   if (!state || !document) return [];
   await state.ready;
-  return state.result ? codeLensesFor(document, state.result) : [];
+  // The document may have been closed or replaced while we waited.
+  const current = documents.get(params.textDocument.uri);
+  if (!current || states.get(params.textDocument.uri) !== state) return [];
+  return state.result ? codeLensesFor(current, state.result) : [];
 });
 
 connection.onShutdown(() => {

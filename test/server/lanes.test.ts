@@ -80,4 +80,12 @@ describe('language server worker lanes', () => {
       ['det.mismatch'],
     );
   });
+
+  it('answers a code-lens request made during a long check once the document is closed (no request left hanging)', async () => {
+    const uri = 'file:///notes/gantry-survey-copy.md';
+    await session.open(uri, 'markdown', longNote(4));
+    const lenses = session.codeLenses(uri);
+    await session.close(uri);
+    assert.deepEqual(await withDeadline(lenses, PROMPT_DEADLINE_MS, 'the code lenses of a closed document'), []);
+  });
 });
