@@ -127,14 +127,21 @@ export class Rational {
   pow(k: number | bigint): Rational {
     let e = BigInt(k);
     if (e < 0n) return this.inv().pow(-e);
-    let base: Rational = this;
-    let acc: Rational = Rational.ONE;
+    let num = 1n;
+    let den = 1n;
+    let bn = this.num;
+    let bd = this.den;
     while (e > 0n) {
-      if (e & 1n) acc = acc.mul(base);
-      base = base.mul(base);
+      if (e & 1n) {
+        num *= bn;
+        den *= bd;
+      }
+      bn *= bn;
+      bd *= bd;
       e >>= 1n;
     }
-    return acc;
+    // Powers of a reduced fraction stay reduced.
+    return new Rational(num, den);
   }
   equals(o: Rational): boolean {
     return this.num === o.num && this.den === o.den;
