@@ -18,7 +18,7 @@ import { TextDocument } from 'vscode-languageserver-textdocument';
 import type { CheckedDocument, DocumentLanguage } from '../checks/types';
 import { codeActionsFor, FIX_ALL_KIND } from './codeActions';
 import { codeLensesFor } from './codeLens';
-import { toDiagnostics } from './diagnostics';
+import { toDiagnostics, type DiagnosticData } from './diagnostics';
 import { hoverFor } from './hover';
 import { DESCRIBE_REQUEST, VERDICTS_NOTIFICATION, type DescribeParams, type VerdictsParams } from './protocol';
 import { defaultSettings, readSettings, type ServerSettings } from './settings';
@@ -183,9 +183,17 @@ connection.onRequest(DESCRIBE_REQUEST, async (params: DescribeParams) => {
   return found?.description ?? null;
 });
 
-connection.onCodeAction(async (params) => {
-  const state = states.get(params.textDocument.uri);
-  return codeActionsFor(params.textDocument.uri, params.context.diagnostics, state?.diagnostics ?? [], params.context.only);
+connection.onCodeAction(async (params, token) => {
+  const uri = params.textDocument.uri;
+  const state = states.get(uri);
+  if (!state) return [];
+  // Fixes are edits of the text as it is now: wait for the check of the latest version, and use
+  // only diagnostics computed for it (a replacement range from an older text would corrupt it).
+  await state.ready;
+  const document = documents.get(uri);
+  if (!document || states.get(uri) !== state || token.isCancellationRequested) return [];
+  const isCurrent = (d: Diagnostic) => (d.data as DiagnosticData | undefined)?.version === document.version;
+  return codeActionsFor(uri, params.context.diagnostics.filter(isCurrent), state.diagnostics.filter(isCurrent), params.context.only);
 });
 
 connection.onCodeLens(async (params) => {

@@ -322,4 +322,28 @@ describe('language server over stdio (settings pushed by the client)', () => {
       ],
     );
   });
+
+  it('computes fixes for the text as it is now: fix-all requested right after an edit never applies stale ranges', async () => {
+    // det [[2, 1], [1, 3]] = 5 (ad − bc by hand).
+    const uri = 'file:///notes/stale-fix.md';
+    const first = '$$A = \\begin{pmatrix} 2 & 1 \\\\ 1 & 3 \\end{pmatrix}$$\n\nSo $\\det A = 7$.\n';
+    await session.open(uri, 'markdown', first);
+    const [stale] = await session.diagnosticsFor(uri, 1);
+    // A heading is added above; the fix is asked for at once, before new diagnostics arrive.
+    const second = `# Heading added above the claim\n\n${first}`;
+    await session.replaceText(uri, second);
+    const [fixAll, quick] = await Promise.all([
+      session.codeActions(uri, [], ['source.fixAll']) as Promise<CodeAction[]>,
+      session.codeActions(uri, [stale], ['quickfix']) as Promise<CodeAction[]>,
+    ]);
+    const expected = second.replace('\\det A = 7', '\\det A = 5');
+    for (const [what, actions] of [['fix-all', fixAll], ['quick fix', quick]] as const) {
+      for (const action of actions) {
+        const edits = action.edit?.changes?.[uri] ?? [];
+        assert.equal(applyTextEdits(second, edits), expected, `${what} "${action.title}" edits the current text correctly`);
+      }
+    }
+    assert.equal(fixAll.length, 1, 'fix-all is offered for the current version');
+    await session.close(uri);
+  });
 });
