@@ -12,6 +12,7 @@
  */
 import { AlgebraicNumber } from './algebraic';
 import type { Field } from './field';
+import type { EigenField } from './jordan-fields';
 import type { JordanDecomposition, JordanFactorBlock } from './jordan';
 import { type Rows, equalRows, mulRows, rankRows } from './jordan-linear';
 import { Poly } from './poly';
@@ -130,4 +131,25 @@ export interface EigenvalueBlocks {
 /** The Jordan structure per eigenvalue, for comparing a user's J or `A \sim J` claim and for display. */
 export function eigenvalueBlocks(jd: JordanDecomposition): EigenvalueBlocks[] {
   return jd.factors.flatMap((f) => factorRoots(f.factor).map((eigenvalue) => ({ eigenvalue, factor: f.factor, sizes: f.sizes })));
+}
+
+/** An element of Q(α) as an exact algebraic number, under the embedding α ↦ root. */
+export function elementAt<T>(K: EigenField<T>, x: T, root: AlgebraicNumber): AlgebraicNumber {
+  const coords = K.coordinates(x);
+  if (coords.length === 1) return AlgebraicNumber.fromRational(coords[0]);
+  return root.polynomialIn(Poly.fromRationals(coords));
+}
+
+/**
+ * The single-field J and X (all eigenvalues rational or in one quadratic field) with entries as
+ * exact algebraic numbers, for display as radicals. `rootIndex` picks the embedding of the field's
+ * generator; both choices give a valid pair (they differ by the order of conjugate blocks).
+ */
+export function singleAsAlgebraic(jd: JordanDecomposition, rootIndex = 0): { J: AlgebraicNumber[][]; X: AlgebraicNumber[][] } | undefined {
+  const single = jd.single;
+  if (!single) return undefined;
+  const K = single.eigen;
+  const root = K.factor.degree() === 1 ? AlgebraicNumber.fromRational(K.alpha as Rational) : AlgebraicNumber.rootOf(K.factor, rootIndex);
+  const convert = (m: Rows<unknown>) => m.map((r) => r.map((x) => elementAt(K, x, root)));
+  return { J: convert(single.J.toRows()), X: convert(single.X.toRows()) };
 }

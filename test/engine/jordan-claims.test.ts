@@ -8,7 +8,7 @@ import { Poly } from '../../src/engine/poly';
 import { AlgebraicNumber } from '../../src/engine/algebraic';
 import { jordanForm } from '../../src/engine/jordan';
 import { eigenFieldFor } from '../../src/engine/jordan-numberfield';
-import { columnsAtRoot, factorRoots, jordanMatrixBlocks, matchesJordanStructure, verifyChangeOfBasis } from '../../src/engine/jordan-claims';
+import { columnsAtRoot, factorRoots, jordanMatrixBlocks, matchesJordanStructure, singleAsAlgebraic, verifyChangeOfBasis } from '../../src/engine/jordan-claims';
 import { loadBenchMatrices } from './matrix-fixtures';
 
 const Q = (rows: number[][]) => Matrix.fromRows(QQ, rows.map((r) => r.map((x) => Rational.fromInt(x))));
@@ -75,5 +75,20 @@ test('our X columns for each conjugate root, exactly in radicals: A·x = λ·x f
       ax.forEach((v, r) => assert.ok(v.equals(lambda.mul(x[r])), `A·x = λx for λ = ${lambda.toString()}`));
     });
     assert.ok(roots.every((r) => r.toLatex().length > 0));
+  }
+});
+
+test('the single-field J and X in radicals satisfy A·X = X·J as algebraic numbers (Q(√2) example with ±√2, ±2√2)', () => {
+  const c = Q([[0, 2, 0, 0], [1, 0, 0, 0], [0, 0, 0, 8], [0, 0, 1, 0]]);
+  const jd = jordanForm(c);
+  for (const k of [0, 1]) {
+    const { J, X } = singleAsAlgebraic(jd, k)!;
+    const a = c.toRows().map((r) => r.map((x) => AlgebraicNumber.fromRational(x)));
+    const mul = (p: AlgebraicNumber[][], q: AlgebraicNumber[][]) =>
+      p.map((r) => q[0].map((_, j) => r.reduce((s, v, i) => s.add(v.mul(q[i][j])), AlgebraicNumber.fromInt(0))));
+    const lhs = mul(a, X);
+    const rhs = mul(X, J);
+    lhs.forEach((r, i) => r.forEach((v, j) => assert.ok(v.equals(rhs[i][j]))));
+    assert.deepEqual(J.map((r, i) => r[i].toLatex()).sort(), ['-2\\sqrt{2}', '-\\sqrt{2}', '2\\sqrt{2}', '\\sqrt{2}'].sort());
   }
 });
