@@ -2,7 +2,7 @@
  * Checker behaviour found wrong while testing the command line, each reported to the lead (the
  * checks, document and engine layers are not this test folder's to change). They are marked
  * `todo` so the suite stays green while they are open: each still runs, and its TODO line in the
- * report says whether it passes yet. Remove the `todo` once the fix lands.
+ * report says whether it passes yet. Remove the `todo` once the fix lands (as done for the first).
  */
 import assert from 'node:assert/strict';
 import { readFileSync, writeFileSync } from 'node:fs';
@@ -55,8 +55,7 @@ describe('known checker bugs (reported to the lead)', () => {
   after(() => remove());
 
   it(
-    'display math opened as "$$claim" and closed at the end of a later line does not swallow the rest of the note',
-    { todo: 'reported: micromark reads "$$text" at a line start as a math fence with meta, unclosed to the end of the note' },
+    'display math opened as "$$claim" and closed at the end of a later line does not swallow the rest of the note (fixed)',
     () => {
       // K = [[3, 1], [2, 4]] has rank 2; M = diag(2, 3, 5) has det 30 (by hand).
       const claims = claimsOf(
