@@ -14,6 +14,7 @@
  * minimal polynomial of D is square-free and D is diagonalisable).
  */
 import { Budget, DomainError } from './errors';
+import { characteristicPolynomial } from './charpoly';
 import { Matrix } from './matrix';
 import { Poly, polyExtendedGcd, squareFreePart } from './poly';
 import { QQ, type Rational } from './rational';
@@ -84,10 +85,11 @@ export function semisimplePolynomial(chi: Poly, budget: Budget = Budget.unlimite
   throw new DomainError('Newton iteration for the semisimple part did not converge');
 }
 
-/** The Jordan–Chevalley split of A, given its characteristic polynomial χ (monic, det(xI − A)). */
-export function jordanChevalley(a: Matrix<Rational>, chi: Poly, budget: Budget = Budget.unlimited()): JordanChevalley {
+/** The Jordan–Chevalley split of A; χ = det(xI − A) is computed when not passed. */
+export function jordanChevalley(a: Matrix<Rational>, chiGiven?: Poly, budget: Budget = Budget.unlimited()): JordanChevalley {
   const n = a.requireSquare();
   const a2 = a.convertTo(QQ);
+  const chi = chiGiven ?? characteristicPolynomial(a2, budget);
   const dPolynomial = semisimplePolynomial(chi, budget);
   const D = polyAtMatrix(dPolynomial, a2, budget);
   const N = a2.sub(D);
