@@ -18,7 +18,7 @@ export function encloseAlgebraic(x: AlgebraicNumber, bits: number): ComplexInter
 }
 
 /** Σ c_j z^j by Horner's rule on intervals. */
-function hornerInterval(coords: readonly Rational[], z: ComplexInterval, bits: number): ComplexInterval {
+export function hornerInterval(coords: readonly Rational[], z: ComplexInterval, bits: number): ComplexInterval {
   let acc = ComplexInterval.fromRational(Rational.ZERO, bits);
   for (let j = coords.length - 1; j >= 0; j--) acc = acc.mul(z).add(ComplexInterval.fromRational(coords[j], bits));
   return acc;

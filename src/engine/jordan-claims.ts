@@ -13,6 +13,9 @@
 import { AlgebraicNumber } from './algebraic';
 import type { Field } from './field';
 import type { EigenField } from './jordan-fields';
+import { ComplexInterval } from './exponential-interval';
+import type { CertifiedComplex } from './exponential-numeric';
+import { encloseAlgebraic, hornerInterval } from './exponential-values';
 import type { JordanDecomposition, JordanFactorBlock } from './jordan';
 import { type Rows, equalRows, mulRows, rankRows } from './jordan-linear';
 import { Poly } from './poly';
@@ -152,4 +155,20 @@ export function singleAsAlgebraic(jd: JordanDecomposition, rootIndex = 0): { J: 
   const root = K.factor.degree() === 1 ? AlgebraicNumber.fromRational(K.alpha as Rational) : AlgebraicNumber.rootOf(K.factor, rootIndex);
   const convert = (m: Rows<unknown>) => m.map((r) => r.map((x) => elementAt(K, x, root)));
   return { J: convert(single.J.toRows()), X: convert(single.X.toRows()) };
+}
+
+/**
+ * The X columns of one factor for its root number k as certified decimal enclosures (any degree;
+ * the display route for roots of degree > 2, shown as "roots of f" with decimals). Each entry's
+ * rectangle contains the exact value; `digits` sets the working precision of the root disk.
+ */
+export function numericColumnsAtRoot(block: JordanFactorBlock, k: number, digits = 12): CertifiedComplex[][] {
+  const bits = Math.ceil(digits * 3.33) + 64;
+  const z = block.factor.degree() === 1
+    ? ComplexInterval.fromRational(block.factor.coeff(0).neg(), bits)
+    : encloseAlgebraic(AlgebraicNumber.rootOf(block.factor, k), bits);
+  return block.X.toRows().map((r) => r.map((x) => {
+    const v = hornerInterval(block.eigen.coordinates(x), z, bits);
+    return { re: v.re.toRationals(), im: v.im.toRationals() };
+  }));
 }

@@ -8,7 +8,7 @@ import { Poly } from '../../src/engine/poly';
 import { AlgebraicNumber } from '../../src/engine/algebraic';
 import { jordanForm } from '../../src/engine/jordan';
 import { eigenFieldFor } from '../../src/engine/jordan-numberfield';
-import { columnsAtRoot, factorRoots, jordanMatrixBlocks, matchesJordanStructure, singleAsAlgebraic, verifyChangeOfBasis } from '../../src/engine/jordan-claims';
+import { columnsAtRoot, factorRoots, jordanMatrixBlocks, matchesJordanStructure, numericColumnsAtRoot, singleAsAlgebraic, verifyChangeOfBasis } from '../../src/engine/jordan-claims';
 import { loadBenchMatrices } from './matrix-fixtures';
 
 const Q = (rows: number[][]) => Matrix.fromRows(QQ, rows.map((r) => r.map((x) => Rational.fromInt(x))));
@@ -91,4 +91,25 @@ test('the single-field J and X in radicals satisfy A·X = X·J as algebraic numb
     lhs.forEach((r, i) => r.forEach((v, j) => assert.ok(v.equals(rhs[i][j]))));
     assert.deepEqual(J.map((r, i) => r[i].toLatex()).sort(), ['-2\\sqrt{2}', '-\\sqrt{2}', '2\\sqrt{2}', '\\sqrt{2}'].sort());
   }
+});
+
+test('dense_8: the eigenvector columns for all 8 conjugate roots, as certified decimals, satisfy A·x ≈ λx (embeddings of Q(α))', () => {
+  const m = loadBenchMatrices().find((x) => x.name === 'dense_8')!;
+  const jd = jordanForm(Q(m.matrix));
+  const block = jd.factors[0];
+  const roots = factorRoots(block.factor);
+  roots.forEach((root, k) => {
+    const cols = numericColumnsAtRoot(block, k, 20);
+    const mid = (x: { lo: Rational; hi: Rational }) => x.lo.add(x.hi).div(Rational.of(2)).toNumber();
+    const x = cols.map((r) => ({ re: mid(r[0].re), im: mid(r[0].im) }));
+    const d = root.disk(15);
+    const lre = d.re.toNumber();
+    const lim = d.im.toNumber();
+    const scale = Math.max(...x.map((v) => Math.hypot(v.re, v.im)));
+    m.matrix.forEach((row, i) => {
+      const ax = row.reduce((s, a, j) => ({ re: s.re + a * x[j].re, im: s.im + a * x[j].im }), { re: 0, im: 0 });
+      const lx = { re: lre * x[i].re - lim * x[i].im, im: lre * x[i].im + lim * x[i].re };
+      assert.ok(Math.hypot(ax.re - lx.re, ax.im - lx.im) <= 1e-9 * scale * 100, `root ${k}, row ${i}`);
+    });
+  });
 });
