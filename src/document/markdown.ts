@@ -100,25 +100,34 @@ function scanWithAttachedDisplays(text: string): ScanResult {
   const attached: MathRegion[] = [];
   for (let pass = 0; pass < MAX_ATTACHED_PASSES; pass++) {
     const result = scanWithoutByteOrderMark(work);
-    const region = result.regions.find((r) => r.delimiter === '$$' && r.kind === 'display' && opensWithMath(work, r));
-    const open = region ? work.indexOf('$$', region.start) : -1;
-    const close = open >= 0 ? work.indexOf('$$', open + 2) : -1;
-    if (!region || close < 0) {
+    // Every such block found in this pass is blanked at once; what they swallowed is read on the
+    // next pass (usually the last), so a long note costs a couple of passes, not one per block.
+    let found = 0;
+    let after = 0;
+    for (const region of result.regions) {
+      if (region.delimiter !== '$$' || region.kind !== 'display' || region.start < after || !opensWithMath(work, region)) continue;
+      const open = work.indexOf('$$', region.start);
+      const close = work.indexOf('$$', open + 2);
+      if (close < 0) continue;
+      attached.push({
+        kind: 'display',
+        delimiter: '$$',
+        start: open,
+        end: close + 2,
+        contentStart: open + 2,
+        contentEnd: close,
+        skips: closeRanges(region.skips, open + 2, close),
+      });
+      work = work.slice(0, open) + work.slice(open, close + 2).replace(/[^\r\n]/g, ' ') + work.slice(close + 2);
+      after = close + 2;
+      found++;
+    }
+    if (found === 0) {
       if (attached.length === 0) return result;
       const problems = result.problems.filter((p) => !attached.some((a) => a.start <= p.start && p.end <= a.end));
       const regions = [...result.regions, ...attached].sort((a, b) => a.start - b.start);
       return { regions, problems };
     }
-    attached.push({
-      kind: 'display',
-      delimiter: '$$',
-      start: open,
-      end: close + 2,
-      contentStart: open + 2,
-      contentEnd: close,
-      skips: closeRanges(region.skips, open + 2, close),
-    });
-    work = work.slice(0, open) + work.slice(open, close + 2).replace(/[^\r\n]/g, ' ') + work.slice(close + 2);
   }
   return scanWithoutByteOrderMark(work);
 }
