@@ -6,6 +6,9 @@ import { Matrix } from '../src/engine/matrix';
 import { characteristicPolynomial, determinant } from '../src/engine/charpoly';
 import { factorOverQ } from '../src/engine/factor';
 import { spectrum } from '../src/engine/spectrum';
+import { jordanForm } from '../src/engine/jordan';
+import { matrixExponential } from '../src/engine/exponential';
+import { QQ } from '../src/engine/rational';
 
 /** One timed operation. The reference snippets are our own fixed code, never document text. */
 export interface BenchOperation {
@@ -39,5 +42,17 @@ export const BENCH_OPERATIONS: BenchOperation[] = [
     name: 'spectrum',
     ours: (a) => spectrum(a),
     pari: '[factor(charpoly(A)), matfrobenius(A, 1)]',
+  },
+  // Jordan form with its verified X, and e^{At} as exact exponential polynomials (issue 4). Their
+  // SymPy counterparts (A.jordan_form(), (A*t).exp()) raise on the dense matrices and run for
+  // minutes on planted_12, which this runner has no per-call cap for; `npm run bench:jordan`
+  // (bench/jordan.ts) times them against SymPy with a cap and reports "over N s".
+  {
+    name: 'jordan+X',
+    ours: (a) => jordanForm(a.convertTo(QQ)),
+  },
+  {
+    name: 'exp(At)',
+    ours: (a) => matrixExponential(a.convertTo(QQ)),
   },
 ];
