@@ -3,7 +3,7 @@
  * offsets and positioned problems. Scanning never throws.
  */
 import type { DocumentLanguage, MathRegion, ScanOptions, ScanResult } from './types.js';
-import { scanMarkdown } from './markdown.js';
+import { scanMarkdownChunked } from './markdown-chunks.js';
 import { scanLatex } from './latex.js';
 import { problemCodes } from './common.js';
 
@@ -21,7 +21,7 @@ export { problemCodes };
 export function scanDocument(text: string, language: DocumentLanguage, options: ScanOptions = {}): ScanResult {
   let result: ScanResult;
   try {
-    result = language === 'latex' ? scanLatex(text) : scanMarkdown(text);
+    result = language === 'latex' ? scanLatex(text) : scanMarkdownChunked(text);
   } catch (error) {
     // A scanner bug must not take the editor down: report it where the document starts.
     return {

@@ -59,6 +59,12 @@ function markdownEvents(text: string): Event[] {
   return postprocess(parser.document().write(preprocess()(text, undefined, true)));
 }
 
+/** Scans a whole Markdown text and also says whether a fence or `$$` block is open at its end. */
+export function scanMarkdownText(text: string): ScanResult & { openAtEnd: boolean } {
+  const result = scanMarkdown(text);
+  return { ...result, openAtEnd: (result as { openAtEnd?: boolean }).openAtEnd ?? false };
+}
+
 /** Finds every math region of SPEC §2 in a Markdown document. */
 export function scanMarkdown(text: string): ScanResult {
   // micromark drops a leading byte-order mark and counts offsets without it; we scan the text
@@ -95,7 +101,7 @@ const MAX_ATTACHED_PASSES = 64;
  * display math from the opening `$$` to the next `$$`. The block is then blanked (same length, line
  * breaks kept) and the document scanned again, so everything after it is read as usual.
  */
-function scanWithAttachedDisplays(text: string): ScanResult {
+function scanWithAttachedDisplays(text: string): ScanResult & { openAtEnd: boolean } {
   let work = text;
   const attached: MathRegion[] = [];
   for (let pass = 0; pass < MAX_ATTACHED_PASSES; pass++) {
@@ -126,7 +132,7 @@ function scanWithAttachedDisplays(text: string): ScanResult {
       if (attached.length === 0) return result;
       const problems = result.problems.filter((p) => !attached.some((a) => a.start <= p.start && p.end <= a.end));
       const regions = [...result.regions, ...attached].sort((a, b) => a.start - b.start);
-      return { regions, problems };
+      return { regions, problems, openAtEnd: result.openAtEnd };
     }
   }
   return scanWithoutByteOrderMark(work);
@@ -144,7 +150,8 @@ function opensWithMath(text: string, region: MathRegion): boolean {
   return false;
 }
 
-function scanWithoutByteOrderMark(text: string): ScanResult {
+function scanWithoutByteOrderMark(text: string): ScanResult & { openAtEnd: boolean } {
+  let openAtEnd = false;
   const regions: MathRegion[] = [];
   const problems: Problem[] = [];
   let open: OpenConstruct | undefined;
@@ -195,6 +202,8 @@ function scanWithoutByteOrderMark(text: string): ScanResult {
       }
     } else {
       if (open && type === open.type) {
+        // A fence or $$ block still open where the text ends (chunked scanning must read on).
+        if (open.type !== 'mathText' && open.fences.length < 2 && token.end.offset >= text.length - 1) openAtEnd = true;
         finishConstruct(text, open, token.end.offset, regions, problems);
         open = undefined;
       } else if (INLINE_CONTAINER_TYPES.has(type)) {
@@ -214,7 +223,7 @@ function scanWithoutByteOrderMark(text: string): ScanResult {
       }
     }
   }
-  return { regions, problems };
+  return { regions, problems, openAtEnd };
 }
 
 /** Turns a collected `$$` block, `$…$` span or fenced block into a region (or nothing). */

@@ -145,7 +145,7 @@ connection.onDidChangeConfiguration((change) => {
 });
 
 documents.onDidOpen((e) => scheduleCheck(e.document, 0));
-documents.onDidChangeContent((e) => scheduleCheck(e.document, 60));
+documents.onDidChangeContent((e) => scheduleCheck(e.document, 25));
 documents.onDidClose((e) => {
   const state = states.get(e.document.uri);
   state?.job?.cancel();
