@@ -11,11 +11,11 @@ import { generatedNote } from './notes';
 
 const notes = Number(process.env.BENCH_NOTES ?? 100);
 const dir = mkdtempSync(join(tmpdir(), 'notary-bench-cli-'));
-let claims = 0;
+let written = 0;
 try {
   for (let i = 0; i < notes; i++) {
     const note = generatedNote(1000 + i);
-    claims += note.claims;
+    written += note.claims;
     writeFileSync(join(dir, `note-${String(i).padStart(3, '0')}.md`), note.text);
   }
   const cli = resolve(__dirname, '..', 'dist', 'cli.js');
@@ -28,7 +28,7 @@ try {
   }
   const report = JSON.parse(run.stdout) as { summary: { holds: number; fails: number; unchecked: number } };
   const decided = report.summary.holds + report.summary.fails + report.summary.unchecked;
-  console.log(`checked ${notes} notes: ${decided} claims (${report.summary.holds} hold, ${report.summary.fails} fail, ${report.summary.unchecked} unchecked) in ${seconds.toFixed(2)} s; target ≤ 5 s`);
+  console.log(`checked ${notes} notes (${written} claims written): ${decided} claims (${report.summary.holds} hold, ${report.summary.fails} fail, ${report.summary.unchecked} unchecked) in ${seconds.toFixed(2)} s; target ≤ 5 s`);
   console.log(JSON.stringify({ notes, claims: decided, seconds: Number(seconds.toFixed(3)) }));
 } finally {
   rmSync(dir, { recursive: true, force: true });
