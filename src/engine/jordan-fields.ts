@@ -85,24 +85,21 @@ export function quadraticDiscriminant(f: Poly): Rational {
   return f.coeff(1).mul(f.coeff(1)).sub(Rational.of(4).mul(f.coeff(0)));
 }
 
-function integerSqrt(n: bigint): bigint | undefined {
-  if (n < 0n) return undefined;
+function floorSqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
-  // Newton refinement for large n where the double estimate is far off.
-  if (x * x !== n) {
-    let y = x;
-    for (let i = 0; i < 200; i++) {
-      const z = (y + n / y) / 2n;
-      if (z >= y) break;
-      y = z;
-    }
-    while (y * y > n) y--;
-    while ((y + 1n) * (y + 1n) <= n) y++;
+  // Newton's iteration from a power of two above √n (works for any size; a double estimate
+  // would overflow above 2^1024).
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
+  for (;;) {
+    const y = (x + n / x) >> 1n;
+    if (y >= x) return x;
     x = y;
   }
+}
+
+function integerSqrt(n: bigint): bigint | undefined {
+  if (n < 0n) return undefined;
+  const x = floorSqrt(n);
   return x * x === n ? x : undefined;
 }
 

@@ -37,14 +37,12 @@ export function squareFreeSplit(n: bigint): { square: bigint; radicand: bigint }
 
 function integerSqrt(n: bigint): bigint {
   if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
+  // Newton's iteration from a power of two above √n (works for any size; a double estimate
+  // would overflow above 2^1024).
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
   for (;;) {
-    const y = (x + n / x) / 2n;
-    if (y >= x) {
-      while (x * x > n) x--;
-      while ((x + 1n) * (x + 1n) <= n) x++;
-      return x;
-    }
+    const y = (x + n / x) >> 1n;
+    if (y >= x) return x;
     x = y;
   }
 }

@@ -174,3 +174,16 @@ test('e^{A} exactly for the Moler–Van Loan matrix: −2e^{−1} + 3e^{−17} i
   const block = rationalExp(Q([[2, 1], [0, 2]]));
   assert.deepEqual(valueAtOne(block[0][1]).map((x) => `${x.coef}·e^${x.exponent}`), ['1·e^2']);
 });
+
+test('exponential polynomial algebra: d/dt(t e^{2t}) = e^{2t} + 2t e^{2t}, products add rates, like terms cancel exactly (common practice, no source)', () => {
+  const te2 = ExpPolynomial.monomial(QQ, Rational.ONE, 1, q(2));
+  const expected = ExpPolynomial.fromTerms(QQ, [{ coef: q(1), power: 0, rate: q(2) }, { coef: q(2), power: 1, rate: q(2) }]);
+  assert.ok(te2.derivative().equals(expected));
+  const em2 = ExpPolynomial.monomial(QQ, q(3), 0, q(-2));
+  assert.ok(te2.mul(em2).equals(ExpPolynomial.monomial(QQ, q(3), 1, q(0))), 't e^{2t}·3e^{−2t} = 3t');
+  assert.ok(te2.sub(te2).isZero());
+  assert.ok(!te2.equals(ExpPolynomial.monomial(QQ, Rational.ONE, 1, q(3))), 'different rates are different functions');
+  assert.ok(expected.valueAtZero().equals(q(1)));
+  assert.ok(te2.rescaleTime(q(-1)).equals(ExpPolynomial.monomial(QQ, q(-1), 1, q(-2))), 't ↦ −t');
+  assert.throws(() => ExpPolynomial.monomial(QQ, q(1), -1, q(0)), RangeError);
+});
