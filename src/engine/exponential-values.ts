@@ -5,7 +5,7 @@
  * interval arithmetic; the precision doubles until every entry is as narrow as asked.
  */
 import { AlgebraicNumber } from './algebraic';
-import { BudgetError } from './errors';
+import { Budget, BudgetError } from './errors';
 import { ComplexInterval, FixedInterval, expInterval } from './exponential-interval';
 import type { CertifiedComplex } from './exponential-numeric';
 import type { MatrixExponential } from './exponential';
@@ -24,7 +24,7 @@ export function hornerInterval(coords: readonly Rational[], z: ComplexInterval, 
   return acc;
 }
 
-function entriesAt(E: MatrixExponential, t: Rational, bits: number): ComplexInterval[][] {
+function entriesAt(E: MatrixExponential, t: Rational, bits: number, budget: Budget): ComplexInterval[][] {
   const n = E.n;
   const out: ComplexInterval[][] = Array.from({ length: n }, () => Array.from({ length: n }, () => ComplexInterval.fromRational(Rational.ZERO, bits)));
   const tt = ComplexInterval.fromRational(t, bits);
@@ -37,6 +37,7 @@ function entriesAt(E: MatrixExponential, t: Rational, bits: number): ComplexInte
         let scale = ex;
         for (let p = 0; p < k; p++) scale = scale.mul(tt);
         for (let i = 0; i < n; i++) {
+          budget.tick(n * comp.factor.degree());
           for (let j = 0; j < n; j++) {
             const coords = comp.eigen.coordinates(C.get(i, j));
             if (coords.every((c) => c.isZero())) continue;
@@ -60,9 +61,15 @@ function narrow(x: FixedInterval, digits: number): boolean {
  * e^{At} at rational t, every entry enclosed to `digits` significant digits (or to 10^−2·digits
  * absolutely for entries that are 0 or nearly so). The imaginary parts enclose 0 for a real A.
  */
-export function exponentialValueAt(E: MatrixExponential, t: Rational, digits = 15, maxBits = 1 << 13): CertifiedComplex[][] {
+export function exponentialValueAt(
+  E: MatrixExponential,
+  t: Rational,
+  digits = 15,
+  maxBits = 1 << 13,
+  budget: Budget = Budget.unlimited(),
+): CertifiedComplex[][] {
   for (let bits = Math.max(96, Math.ceil(digits * 3.33) * 2 + 48); bits <= maxBits; bits *= 2) {
-    const v = entriesAt(E, t, bits);
+    const v = entriesAt(E, t, bits, budget);
     if (v.every((row) => row.every((x) => narrow(x.re, digits) && narrow(x.im, digits)))) {
       return v.map((row) => row.map((x) => ({ re: x.re.toRationals(), im: x.im.toRationals() })));
     }
