@@ -260,6 +260,9 @@ function namesPhrase(found: readonly { name: string }[]): string {
 function decideClaim(link: Link, statement: Statement, ctx: StatementContext): ClaimResult {
   const budget = newBudget(ctx);
   const ec = evalContext(ctx, budget);
+  // A claim with a part the notation could not read is not decided on what remains of it.
+  const unread = statement.problems.find((p) => p.start < link.end && p.end > link.start) ?? statement.problems.find((p) => p.start === p.end && p.start === link.end);
+  if (unread) return result(link, ctx, 'unchecked', 'unchecked.unreadable', `part of this claim could not be read: ${unread.message}`, []);
   const missing = undefinedMatrixNames(link, ctx);
   if (missing.length) {
     const failed = missing.map((m) => ctx.env.failure(m.key)).find((f) => f !== undefined);

@@ -3,7 +3,7 @@
  * when they wrote decimals (rounded to their number of places), `\frac` or `a/b` as they wrote.
  */
 import type { Matrix } from '../engine/index';
-import { formatScalar } from './print-scalar';
+import { exactDecimal, formatScalar } from './print-scalar';
 import type { MatrixEnvironment } from '../notation/index';
 import { asRational, SCALAR, type Scalar } from './scalar';
 
@@ -49,7 +49,12 @@ export function matrixLatex(m: Matrix<Scalar>, style: PrintStyle = defaultStyle)
       const cells: string[] = [];
       for (let j = 0; j < m.cols; j++) {
         const r = asRational(m.get(i, j));
-        cells.push(r && r.isInteger() ? r.num.toString() : JSON.stringify(scalarText(m.get(i, j), { ...style, environment: 'pmatrix' })));
+        // JSON numbers stay numbers (integers, and decimals where the note writes decimals);
+        // anything else is a string the notary reader understands ("1/3", "\\sqrt{2}").
+        const decimal = r && style.decimalPlaces !== undefined ? exactDecimal(r, 40) : undefined;
+        if (r && r.isInteger()) cells.push(r.num.toString());
+        else if (decimal !== undefined) cells.push(decimal);
+        else cells.push(JSON.stringify(r ? r.toString() : scalarLatex(m.get(i, j), { ...style, environment: 'pmatrix' })));
       }
       jsonRows.push(`[${cells.join(', ')}]`);
     }

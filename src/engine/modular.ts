@@ -12,6 +12,8 @@
  * modulo p is the reduction of A's, for every p, so the only question is how many primes the
  * bound asks for.
  */
+// ⌈√x⌉ is shared with the polynomial code (no float start, so any size works).
+import { ceilSqrt } from './intpoly';
 import { Budget } from './errors';
 
 const PRIME_LIMIT = 2 ** 26;
@@ -222,20 +224,6 @@ export function determinantModP(a: Float64Array, n: number, p: number): number {
   return det;
 }
 
-/** ⌈√x⌉ for x ≥ 0 (Newton's method on bigint). */
-export function ceilSqrt(x: bigint): bigint {
-  if (x < 2n) return x;
-  let r = BigInt(Math.floor(Math.sqrt(Number(x))));
-  // Newton from a float start; a few rounds fix the float error for any size.
-  for (let k = 0; k < 200; k++) {
-    const next = (r + x / r) >> 1n;
-    if (next === r || next === r + 1n) break;
-    r = next;
-  }
-  while (r * r > x) r -= 1n;
-  while (r * r < x) r += 1n;
-  return r;
-}
 
 /** The Euclidean norms of the rows, each rounded up: ⌈‖row_i‖₂⌉. */
 export function rowNormsCeil(entries: readonly bigint[], n: number, cols = n): bigint[] {

@@ -15,7 +15,8 @@ import {
   determinant,
   determinantIntegerModular,
 } from '../../src/engine/charpoly';
-import { ceilSqrt, modularPrime, primesForBound, reconstructCRT } from '../../src/engine/modular';
+import { modularPrime, primesForBound, reconstructCRT } from '../../src/engine/modular';
+import { ceilSqrt } from '../../src/engine/intpoly';
 import { Poly } from '../../src/engine/poly';
 import { QQ, Rational } from '../../src/engine/rational';
 import { ROSSER } from './matrix-fixtures';
@@ -99,6 +100,9 @@ test('CRT and bound helpers', () => {
   assert.equal(ceilSqrt(16n), 4n);
   assert.equal(ceilSqrt(17n), 5n);
   assert.equal(ceilSqrt(10n ** 40n + 1n), 10n ** 20n + 1n);
+  // Beyond the range of doubles (a float start would be Infinity): common practice, no source.
+  assert.equal(ceilSqrt(10n ** 700n), 10n ** 350n);
+  assert.equal(ceilSqrt(10n ** 700n + 1n), 10n ** 350n + 1n);
   const ps = primesForBound(10n ** 30n);
   assert.ok(ps.reduce((a, p) => a * BigInt(p), 1n) > 2n * 10n ** 30n + 1n);
   assert.ok(modularPrime(0) < 2 ** 26 && modularPrime(1) < modularPrime(0));
