@@ -213,6 +213,8 @@ function isEquation(link: Link, ctx: StatementContext): boolean {
   for (const side of [link.left, link.right]) {
     walk(side, (n) => {
       if (vectorUnknown || n.kind === 'matrix') return false;
+      // e^{At}, \cos \omega t: the variable of a function is not an unknown vector.
+      if (n.kind === 'apply' && ['exp', 'cos', 'sin', 'cosh', 'sinh', 'charpoly', 'minpoly', 'jordanBlock'].includes(n.func)) return false;
       if (n.kind === 'multiply') {
         const matrixSide = involvesMatrix(n.left, ctx.env) || involvesMatrix(n.right, ctx.env);
         const tail = unwrap(n.right);

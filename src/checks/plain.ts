@@ -73,8 +73,21 @@ export function softenLatex(latex: string): string {
   );
   s = s.replace(/\\(?:left|right|big|Big|bigl|bigr|Bigl|Bigr)\b/g, '');
   s = s.replace(/\\[,;:!]/g, ' ');
+  s = rewriteCommand(s, /\\(?:hat|widehat)/g, 1, ([a]) => `${a}\u0302`);
+  s = rewriteCommand(s, /\\(?:tilde|widetilde)/g, 1, ([a]) => `${a}\u0303`);
+  s = rewriteCommand(s, /\\(?:bar|overline)/g, 1, ([a]) => `${a}\u0304`);
+  s = rewriteCommand(s, /\\dot/g, 1, ([a]) => `${a}\u0307`);
+  s = rewriteCommand(s, /\\ddot/g, 1, ([a]) => `${a}\u0308`);
+  s = s.replace(/\^\s*(?:\{\s*(?:\\mathsf\s*\{?\s*T\s*\}?|\\top|\\intercal|T)\s*\}|\\top\b|\\intercal\b|T\b)/g, 'ᵀ');
+  s = s.replace(/\^\s*\{\s*(?:\*|H|\\ast|\\dagger)\s*\}|\^\s*(?:\*|\\ast|\\dagger)/g, '*');
+  s = s.replace(/\^\s*\{\s*-\s*1\s*\}/g, '⁻¹');
+  s = s.replace(/\\sqrt\s*\[\s*3\s*\]/g, '∛').replace(/\\sqrt\s*\[\s*4\s*\]/g, '∜');
+  s = rewriteCommand(s, /∛/g, 1, ([a]) => (simple(a) ? `∛${a}` : `∛(${a})`));
+  s = rewriteCommand(s, /∜/g, 1, ([a]) => (simple(a) ? `∜${a}` : `∜(${a})`));
   s = rewriteCommand(s, /\\sqrt/g, 1, ([a]) => (simple(a) ? `√${a}` : `√(${a})`));
-  s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}`);
+  s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `\u0001${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}\u0002`);
+  // A fraction written before a product (\frac{1}{2}A) reads as (1/2)A, never 1/2A.
+  s = s.replace(/\u0001([^\u0001\u0002]*)\u0002(?=\s*(?:[\p{L}([]|\\[a-zA-Z]))/gu, '($1)').replace(/[\u0001\u0002]/g, '');
   s = s.replace(/\\approx/g, '≈').replace(/\\l?dots|\\cdots/g, '…').replace(/\\neq?\b/g, '≠').replace(/\\sim\b/g, '∼');
   s = s.replace(/\\cdot/g, '·').replace(/\\times/g, '×').replace(/\\pm/g, '±').replace(/\\mp/g, '∓').replace(/\\oplus/g, '⊕').replace(/\\top\b/g, 'T');
   s = s.replace(/\\\{/g, '{').replace(/\\\}/g, '}');

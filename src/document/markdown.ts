@@ -124,7 +124,7 @@ function scanWithAttachedDisplays(text: string): ScanResult & { openAtEnd: boole
         contentEnd: close,
         skips: closeRanges(region.skips, open + 2, close),
       });
-      work = work.slice(0, open) + work.slice(open, close + 2).replace(/[^\r\n]/g, ' ') + work.slice(close + 2);
+      work = work.slice(0, open) + blankBlock(work, open, close + 2) + work.slice(close + 2);
       after = close + 2;
       found++;
     }
@@ -138,10 +138,25 @@ function scanWithAttachedDisplays(text: string): ScanResult & { openAtEnd: boole
   return scanWithoutByteOrderMark(work);
 }
 
+/**
+ * The block's text replaced by filler of the same length, line breaks kept. Its lines become
+ * blank, except that text after the closing `$$` on the last line keeps a filler word in front of
+ * it (spaces would turn that text into an indented code block).
+ */
+function blankBlock(text: string, start: number, end: number): string {
+  const block = text.slice(start, end).replace(/[^\r\n]/g, ' ');
+  let lineEnd = end;
+  while (lineEnd < text.length && text[lineEnd] !== '\n' && text[lineEnd] !== '\r') lineEnd++;
+  if (text.slice(end, lineEnd).trim() === '') return block;
+  const lastBreak = Math.max(block.lastIndexOf('\n'), block.lastIndexOf('\r'));
+  return block.slice(0, lastBreak + 1) + 'x'.repeat(block.length - lastBreak - 1);
+}
+
 /** True when a `$$` block has math on its opening line (CommonMark would call it meta). */
 function opensWithMath(text: string, region: MathRegion): boolean {
   const open = text.indexOf('$$', region.start);
-  if (open < 0 || open > region.contentStart) return false;
+  // Inline `$$…$$` inside a paragraph has its content right after the delimiter: not such a block.
+  if (open < 0 || open > region.contentStart || region.contentStart === open + 2) return false;
   let i = open + 2;
   while (i < text.length && text[i] !== '\n' && text[i] !== '\r') {
     if (text[i] !== ' ' && text[i] !== '\t') return true;
