@@ -85,9 +85,9 @@ export function softenLatex(latex: string): string {
   s = rewriteCommand(s, /∛/g, 1, ([a]) => (simple(a) ? `∛${a}` : `∛(${a})`));
   s = rewriteCommand(s, /∜/g, 1, ([a]) => (simple(a) ? `∜${a}` : `∜(${a})`));
   s = rewriteCommand(s, /\\sqrt/g, 1, ([a]) => (simple(a) ? `√${a}` : `√(${a})`));
-  s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `\u0001${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}\u0002`);
+  s = rewriteCommand(s, /\\[dtc]?frac/g, 2, ([a, b]) => `\uE000${simple(a) ? a : `(${a})`}/${simple(b) ? b : `(${b})`}\uE001`);
   // A fraction written before a product (\frac{1}{2}A) reads as (1/2)A, never 1/2A.
-  s = s.replace(/\u0001([^\u0001\u0002]*)\u0002(?=\s*(?:[\p{L}([]|\\[a-zA-Z]))/gu, '($1)').replace(/[\u0001\u0002]/g, '');
+  s = s.replace(/\uE000([^\uE000\uE001]*)\uE001(?=\s*(?:[\p{L}([]|\\[a-zA-Z]))/gu, '($1)').replace(/[\uE000\uE001]/g, '');
   s = s.replace(/\\approx/g, '≈').replace(/\\l?dots|\\cdots/g, '…').replace(/\\neq?\b/g, '≠').replace(/\\sim\b/g, '∼');
   s = s.replace(/\\cdot/g, '·').replace(/\\times/g, '×').replace(/\\pm/g, '±').replace(/\\mp/g, '∓').replace(/\\oplus/g, '⊕').replace(/\\top\b/g, 'T');
   s = s.replace(/\\\{/g, '{').replace(/\\\}/g, '}');
