@@ -81,6 +81,13 @@ async function checkWorkspace(): Promise<void> {
 export function registerCommands(context: vscode.ExtensionContext, client: () => LanguageClient | undefined): void {
   const register = (id: string, fn: (...args: unknown[]) => unknown) => context.subscriptions.push(vscode.commands.registerCommand(id, fn));
   register('matrixNotary.checkWorkspace', checkWorkspace);
+  register('matrixNotary.openExample', async () => {
+    // A copy in untitled form, so the user can try fixes without touching the installed file.
+    const uri = vscode.Uri.joinPath(context.extensionUri, 'media', 'walkthrough', 'example-note.md');
+    const bytes = await vscode.workspace.fs.readFile(uri);
+    const document = await vscode.workspace.openTextDocument({ language: 'markdown', content: new TextDecoder().decode(bytes) });
+    await vscode.window.showTextDocument(document);
+  });
   register('matrixNotary.showDecomposition', async (arg?: unknown) => {
     let description: Description | undefined;
     const target = Array.isArray(arg) ? arg[0] : arg;
