@@ -72,6 +72,11 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   if (relation === 'other') return undefined;
   if (!ctx.definitionsOnly && isEquation(link, ctx)) return undefined;
 
+  // `\pi = (…)` (a stationary distribution) binds π as a name, as Markov-chain notes write it.
+  if (left.kind === 'constant' && left.name === 'pi' && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup('\\pi')))) {
+    const definition = tryDefinition('\\pi', left.start, left.end, link, ctx);
+    if (definition !== 'not-a-matrix') return definition;
+  }
   // Definitions: `A := M` always; `A = M` when A has no definition above.
   if (left.kind === 'symbol' && !RESERVED.has(left.base) && !left.decorations.includes('dot') && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup(left.key)))) {
     const definition = tryDefinition(left.key, left.start, left.end, link, ctx);
@@ -309,21 +314,23 @@ function decideClaim(link: Link, statement: Statement, ctx: StatementContext): C
   const inChain = head !== undefined && computedExpr === link.left && link.left !== head && isLiteralValue(link.left, ctx.env);
   const computedPlain = ctx.plain(computedExpr);
   const claimedPlain = ctx.plain(claimedExpr);
+  // Holds messages keep the order the note wrote the link in.
+  const [leftPlain, rightPlain] = swap ? [claimedPlain, computedPlain] : [computedPlain, claimedPlain];
   const shown = comparison.listForm === 'set' && computed.kind === 'list' ? { kind: 'list' as const, elements: distinctScalars(computed.elements) } : computed;
   const expected = valueLatex(shown, style);
   const expectedText = valueText(shown, style);
   const exactText = valueText(shown, { ...style, decimalPlaces: undefined });
 
   if (relation === 'notEquals') {
-    if (!comparison.equal) return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} ≠ ${claimedPlain} holds`, related(ec), { caution });
+    if (!comparison.equal) return result(link, ctx, 'holds', 'claim.holds', `${leftPlain} ≠ ${rightPlain} holds`, related(ec), { caution });
     return result(link, ctx, 'fails', `${family}.equal`, `${computedPlain} equals ${claimedPlain}: both are ${exactText}`, related(ec), { expected, caution });
   }
   if (relation === 'approx') {
     if (comparison.equal || comparison.withinWrittenPrecision) {
-      return result(link, ctx, 'holds', 'claim.holds', `${computedPlain} ≈ ${claimedPlain} holds (exact value ${exactText})`, related(ec), { caution });
+      return result(link, ctx, 'holds', 'claim.holds', `${leftPlain} ≈ ${rightPlain} holds (exact value ${exactText})`, related(ec), { caution });
     }
   } else if (comparison.equal) {
-    const said = claimedPlain.length <= 40 ? `${computedPlain} = ${claimedPlain} holds` : `${computedPlain} is as written`;
+    const said = leftPlain.length + rightPlain.length <= 60 ? `${leftPlain} = ${rightPlain} holds` : `${computedPlain} is as written`;
     return result(link, ctx, 'holds', 'claim.holds', said, related(ec), { caution });
   } else if (comparison.withinWrittenPrecision) {
     return result(

@@ -101,6 +101,14 @@ function evaluateInner(expr: Expr, ctx: EvalContext): Value {
     case 'constant':
       if (expr.name === 'i') return scalarValue(num(AlgebraicNumber.i()));
       if (expr.name === 'e') return scalarValue(expScalar(int(1)));
+      if (expr.name === 'pi') {
+        const def = ctx.env.lookup('\\pi');
+        if (def) {
+          if (!ctx.used.includes(def)) ctx.used.push(def);
+          return { kind: 'matrix', value: def.value };
+        }
+        throw new Undecidable('unchecked.unsupported', 'π is transcendental: claims with π are not decided (a matrix named \\pi is, once it is defined)');
+      }
       throw new Undecidable('unchecked.unsupported', `the constant ${expr.text} is not supported here`);
     case 'identity': {
       if (!expr.size) return { kind: 'identity', factor: SCALAR.one };

@@ -66,6 +66,7 @@ export function involvesMatrix(e: Expr, env: Environment): boolean {
     if (found) return false;
     if (n.kind === 'matrix' || n.kind === 'directSum') found = true;
     else if (n.kind === 'symbol' && env.lookup(n.key)) found = true;
+    else if (n.kind === 'constant' && n.name === 'pi' && env.lookup('\\pi')) found = true;
     else if (n.kind === 'apply' && MATRIX_FUNCTIONS.has(n.func)) found = true;
     return !found;
   });

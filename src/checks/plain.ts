@@ -67,7 +67,10 @@ function rewriteCommand(s: string, pattern: RegExp, arity: 1 | 2, render: (args:
 /** A LaTeX fragment made readable as plain text. */
 export function softenLatex(latex: string): string {
   let s = latex.replace(/\s+/g, ' ').trim();
-  s = s.replace(/\\begin\{[a-zA-Z]*matrix\}(.*?)\\end\{[a-zA-Z]*matrix\}/g, (_m, body: string) => `[${body.split('\\\\').map((r) => r.split('&').map((x) => x.trim()).join(', ')).join('; ')}]`);
+  const rows = (body: string) => `[${body.split('\\\\').map((r) => r.split('&').map((x) => x.trim()).join(', ')).join('; ')}]`;
+  s = s.replace(/\\begin\{vmatrix\}(.*?)\\end\{vmatrix\}/g, (_m, body: string) => `det${rows(body)}`);
+  s = s.replace(/(?:\\left\s*[([|])?\s*\\begin\{array\}\s*\{[^{}]*\}(.*?)\\end\{array\}\s*(?:\\right\s*[)\]|])?/g, (_m, body: string) => rows(body));
+  s = s.replace(/\\begin\{[a-zA-Z]*matrix\}(.*?)\\end\{[a-zA-Z]*matrix\}/g, (_m, body: string) => rows(body));
   s = s.replace(/\\(?:operatorname|mathrm|text|mathsf|mathbf|mathit)\s*\{([^{}]*)\}(\s*)(?=(.?))/g, (_m, word: string, space: string, next: string) =>
     word + (space || (/^[A-Za-z]{2,}$/.test(word) && /[\p{L}\p{N}\\]/u.test(next)) ? ' ' : ''),
   );

@@ -64,15 +64,15 @@ export function matrixLatex(m: Matrix<Scalar>, style: PrintStyle = defaultStyle)
   return `\\begin{${env}} ${rows.join(' \\\\ ')} \\end{${env}}`;
 }
 
-/** A matrix on one line as plain text: "[[1, 2], [3, 4]]". */
+/** A matrix on one line as plain text, rows separated by semicolons: "[1, 2; 3, 4]". */
 export function matrixText(m: Matrix<Scalar>, style: PrintStyle = defaultStyle): string {
   const rows: string[] = [];
   for (let i = 0; i < m.rows; i++) {
     const cells: string[] = [];
     for (let j = 0; j < m.cols; j++) cells.push(scalarText(m.get(i, j), style));
-    rows.push(`[${cells.join(', ')}]`);
+    rows.push(cells.join(', '));
   }
-  return `[${rows.join(', ')}]`;
+  return `[${rows.join('; ')}]`;
 }
 
 /** Any value as LaTeX. */
