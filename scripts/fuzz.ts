@@ -7,10 +7,12 @@
  *   npm run fuzz                         # 100,000 cases, a fresh random seed (printed)
  *   npm run fuzz -- --runs 500000 --seed 12345 --only checker
  *   NOTARY_STRICT_SURROGATES=1 npm run fuzz   # also fail on ranges that split an astral character
+ *   npm run fuzz -- --no-big             # skip the 5 MB LaTeX note (checked after the properties)
  *
  * Replaying a failure: the same `--seed` with `--only <property>` and `--runs` reproduces it.
  */
 import fc from 'fast-check';
+import { checkPumpLog } from '../test/robustness/big-notes';
 import { robustnessProperties } from '../test/robustness/properties';
 
 function option(name: string): string | undefined {
@@ -46,6 +48,17 @@ for (const p of properties) {
     console.log(fc.defaultReportMessage(details) ?? '(no report)');
   } else {
     console.log(`ok    ${p.name} (${details.numRuns} cases, ${seconds} s)`);
+  }
+}
+// The 5 MB LaTeX note: too slow for `npm test` (the LaTeX parser needs seconds per megabyte).
+if (!process.argv.includes('--no-big') && !only) {
+  const t0 = Date.now();
+  try {
+    checkPumpLog('latex', 5_000_000);
+    console.log(`ok    a 5 MB LaTeX note is read to its end (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+  } catch (error) {
+    failed++;
+    console.log(`FAIL  a 5 MB LaTeX note is read to its end: ${(error as Error).message}`);
   }
 }
 console.log(`fuzz: ${ran} cases in ${((Date.now() - started) / 1000).toFixed(0)} s, seed ${seed}: ${failed ? `${failed} propert${failed === 1 ? 'y' : 'ies'} failed` : 'no failure'}`);
