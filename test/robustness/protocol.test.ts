@@ -1,0 +1,80 @@
+/**
+ * The language server stays responsive on a pathological note: while a 200×200 dense matrix note
+ * is being checked (minutes of exact work with the size budget at its 200 maximum and a 10-minute
+ * time budget), a hover on another, small note is answered — before the heavy note's diagnostics
+ * arrive — and newer edits cancel the stale check, so only the latest version is published.
+ *
+ * Uses the session helper of test/server (the bundled dist/server.js over stdio with
+ * vscode-languageserver-protocol's client). The hover latency is printed, never asserted. The only
+ * waits with deadlines are for what a responsive server delivers promptly: were the heavy check not
+ * cancelled, the latest version's diagnostics could not arrive before the deadline.
+ *
+ * D = diag(2, 5): det 10 (product of the diagonal; common practice, no source).
+ */
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import { positionOf, ServerSession, withDeadline } from '../server/session';
+
+/** A dense 200×200 matrix (entries −9…9 from a linear congruential generator) and heavy claims. */
+function heavyNote(variant: number): string {
+  let seed = 1000 + variant;
+  const entry = () => {
+    seed = (seed * 1103515245 + 12345) % 2147483648;
+    return (seed % 19) - 9;
+  };
+  const rows = Array.from({ length: 200 }, () => Array.from({ length: 200 }, entry).join(' & ')).join(' \\\\\n');
+  let text = `# Frame survey, revision ${variant}\n\n$$M = \\begin{pmatrix}\n${rows}\n\\end{pmatrix}$$\n\n`;
+  for (let k = 2; k < 40; k++) text += `Mode ${k}: $\\chi_{M^{${k}}}(\\lambda) = \\lambda^{200}$ and $(M^{${k}})^{-1} = I$.\n\n`;
+  return text;
+}
+
+const SMALL = '$$D = \\begin{pmatrix} 2 & 0 \\\\ 0 & 5 \\end{pmatrix}$$\n\nSo $\\det D = 11$.\n';
+const HEAVY_URI = 'file:///notes/frame-survey.md';
+const SMALL_URI = 'file:///notes/damper-pair.md';
+/** How long the test waits for what a responsive server delivers in well under a second. */
+const PROMPT_DEADLINE_MS = 30_000;
+
+describe('language server on a pathological note', () => {
+  let session: ServerSession;
+
+  before(async () => {
+    session = await ServerSession.start({ pullConfiguration: false, settings: { maxMatrixSize: 200, timeBudgetMs: 600_000 } });
+  });
+  after(async () => {
+    await session.stop();
+  });
+
+  it('answers a hover on a small note before the heavy note’s diagnostics arrive', async () => {
+    await session.open(HEAVY_URI, 'markdown', heavyNote(1));
+    // Let the heavy check start (it is scheduled at once on open); the hover then competes with it.
+    await new Promise((r) => setTimeout(r, 1000));
+    await session.open(SMALL_URI, 'markdown', SMALL);
+    const at = positionOf(SMALL, SMALL.indexOf('\\det D') + '\\det '.length);
+    const sent = Date.now();
+    const hover = await withDeadline(session.hover(SMALL_URI, at.line, at.character), PROMPT_DEADLINE_MS, 'the hover');
+    console.log(`hover answered ${Date.now() - sent} ms after it was sent, while the heavy note was being checked`);
+    assert.ok(hover, 'a hover over D');
+    assert.match((hover.contents as { value: string }).value, /\bdet(erminant)?\b[\s:=]*10\b/);
+    assert.deepEqual(session.publishedFor(HEAVY_URI), [], 'the hover came before any diagnostics of the heavy note');
+  });
+
+  it('cancels the stale heavy checks when newer edits arrive: only the latest version is published', async () => {
+    await session.replaceText(HEAVY_URI, heavyNote(2));
+    const latest = await session.replaceText(HEAVY_URI, SMALL);
+    const sent = Date.now();
+    const diagnostics = await session.diagnosticsFor(HEAVY_URI, latest, PROMPT_DEADLINE_MS);
+    console.log(`diagnostics of the latest version arrived ${Date.now() - sent} ms after the edit`);
+    assert.deepEqual(
+      diagnostics.map((d) => [d.code, d.range.start.line]),
+      [['det.mismatch', 2]],
+    );
+    assert.deepEqual(
+      session.publishedFor(HEAVY_URI).map((p) => p.version),
+      [latest],
+      'no diagnostics of a stale version were published',
+    );
+    // The small note's check was queued behind the heavy one; it is answered too.
+    const small = await session.diagnosticsFor(SMALL_URI, 1, PROMPT_DEADLINE_MS);
+    assert.deepEqual(small.map((d) => d.code), ['det.mismatch']);
+  });
+});
