@@ -13,6 +13,8 @@
  */
 import fc from 'fast-check';
 import { checkPumpLog } from '../test/robustness/big-notes';
+import { assertFixpoint, staleClaimNote, VARIANTS, variantOf } from '../test/robustness/fixpoint';
+import { sourceNotes } from '../test/robustness/support';
 import { robustnessProperties } from '../test/robustness/properties';
 
 function option(name: string): string | undefined {
@@ -50,6 +52,32 @@ for (const p of properties) {
     console.log(`ok    ${p.name} (${details.numRuns} cases, ${seconds} s)`);
   }
 }
+// Nothing lost: every fixture note and example in all four variants, and generated stale notes.
+if (!only || 'fixpoint'.includes(only)) {
+  const t0 = Date.now();
+  const problems: string[] = [];
+  for (const note of sourceNotes()) {
+    for (const variant of VARIANTS) {
+      try {
+        assertFixpoint(variantOf(note.text, note.language, variant), note.language, `${note.name} (${variant})`);
+      } catch (error) {
+        problems.push((error as Error).message.split('\n')[0]);
+      }
+    }
+  }
+  const generated = fc.check(
+    fc.property(staleClaimNote, (n) => void assertFixpoint(n.text, n.language, `generated ${n.language} note`)),
+    { numRuns: Math.max(100, Math.ceil(total / 50)), seed },
+  );
+  if (generated.failed) problems.push(fc.defaultReportMessage(generated) ?? 'generated notes failed');
+  if (problems.length) {
+    failed++;
+    console.log(`FAIL  fixpoint of every fix (${problems.length} failure(s)):\n${problems.join('\n')}`);
+  } else {
+    console.log(`ok    fixpoint of every fix: all notes in ${VARIANTS.length} variants, ${generated.numRuns} generated notes (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+  }
+}
+
 // The 5 MB LaTeX note: too slow for `npm test` (the LaTeX parser needs seconds per megabyte).
 if (!process.argv.includes('--no-big') && !only) {
   const t0 = Date.now();
