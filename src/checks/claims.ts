@@ -204,6 +204,16 @@ function isZeroLiteral(e: Expr): boolean {
  */
 function isEquation(link: Link, ctx: StatementContext): boolean {
   if (link.relation.kind === 'similar') return false;
+  // The variable of e^{At}, \cos \omega t or χ_A(λ) anywhere in the claim is a variable, not an unknown.
+  const variables = new Set<string>();
+  for (const side of [link.left, link.right]) {
+    walk(side, (n) => {
+      if (n.kind === 'apply' && ['exp', 'cos', 'sin', 'cosh', 'sinh', 'charpoly', 'minpoly'].includes(n.func)) {
+        for (const arg of n.args) walk(arg, (m) => void (m.kind === 'symbol' && variables.add(m.key)));
+      }
+    });
+  }
+  const isUnknownHere = (n: Expr) => isUnknown(n, ctx) && !(n.kind === 'symbol' && variables.has(n.key));
   const hasUnknown = (e: Expr) => {
     let found = false;
     walk(e, (n) => {
@@ -224,8 +234,8 @@ function isEquation(link: Link, ctx: StatementContext): boolean {
         const matrixSide = involvesMatrix(n.left, ctx.env) || involvesMatrix(n.right, ctx.env);
         const tail = unwrap(n.right);
         const unknownTail =
-          (tail.kind === 'symbol' && isUnknown(tail, ctx) && !looksLikeMatrixName(tail.base)) ||
-          (tail.kind === 'symbol' && tail.decorations.length > 0 && isUnknown(tail, ctx)) ||
+          (tail.kind === 'symbol' && isUnknownHere(tail) && !looksLikeMatrixName(tail.base)) ||
+          (tail.kind === 'symbol' && tail.decorations.length > 0 && isUnknownHere(tail)) ||
           tail.kind === 'tuple';
         if (matrixSide && unknownTail) vectorUnknown = true;
       }
@@ -301,7 +311,7 @@ function decideClaim(link: Link, statement: Statement, ctx: StatementContext): C
   const baseStyle = styleOf(claimedExpr, ctx.env.lookup(firstMatrixKey(computedExpr) ?? '')?.environment);
   // An `=` claim's correct value must be exact; an `\approx` claim's is rounded to the written places.
   const style = relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true };
-  const claimedPlaces = entryPlaces(claimedExpr);
+  const claimedPlaces = entryPlaces(claimedExpr, relation === 'approx');
   let comparison;
   try {
     comparison = compareValues(computed, claimed, claimedPlaces);
@@ -392,15 +402,31 @@ function firstMatrixKey(e: Expr): string | undefined {
   return key;
 }
 
-/** Decimal places written at each scalar position of the claimed side (row-major for matrices). */
-function entryPlaces(claimed: Expr): (index: number) => number | undefined {
+/**
+ * Decimal places written at each scalar position of the claimed side (row-major for matrices, in
+ * order for lists, where `a \pm b` counts twice). With `\approx`, a value written without decimals
+ * is meant to its last digit (places 0).
+ */
+function entryPlaces(claimed: Expr, approx: boolean): (index: number) => number | undefined {
   const u = unwrap(claimed);
+  const orZero = (p: number | undefined) => (p === undefined && approx ? 0 : p);
   if (u.kind === 'matrix') {
     const flat = u.rows.flat();
-    return (i) => (flat[i] ? decimalPlaces(flat[i]) : undefined);
+    return (i) => orZero(flat[i] ? decimalPlaces(flat[i]) : undefined);
+  }
+  if (u.kind === 'set' || u.kind === 'list') {
+    const perValue: (number | undefined)[] = [];
+    for (const e of u.elements) {
+      let pm = false;
+      walk(e, (n) => void (n.kind === 'plusMinus' && (pm = true)));
+      const p = decimalPlaces(e);
+      perValue.push(p);
+      if (pm) perValue.push(p);
+    }
+    return (i) => orZero(perValue[i]);
   }
   const places = decimalPlaces(u);
-  return () => places;
+  return () => orZero(places);
 }
 
 /** A print style for a value that follows the claimed expression. */

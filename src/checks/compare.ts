@@ -44,7 +44,7 @@ export function compareValues(computed: Value, claimed: Value, places: (index: n
   if (claimed.kind === 'matrix' && claimed.value.rows === 1 && claimed.value.cols === 1 && computed.kind === 'scalar') {
     claimed = { kind: 'scalar', value: claimed.value.get(0, 0) };
   }
-  if (computed.kind === 'list' || claimed.kind === 'list') return compareLists(computed, claimed, places(0));
+  if (computed.kind === 'list' || claimed.kind === 'list') return compareLists(computed, claimed, places);
   if (computed.kind === 'scalar' && claimed.kind === 'scalar') {
     if (scalarsEqual(computed.value, claimed.value)) return { equal: true, withinWrittenPrecision: false };
     const p = places(0);
@@ -86,17 +86,24 @@ function matchAll(written: readonly Scalar[], actual: readonly Scalar[], same: (
   return match(0);
 }
 
-function compareLists(computed: Value, claimed: Value, places: number | undefined): Comparison {
+function compareLists(computed: Value, claimed: Value, places: (index: number) => number | undefined): Comparison {
   if (computed.kind !== 'list' || claimed.kind !== 'list') {
     throw new Undecidable('unchecked.unsupported', 'an eigenvalue list can only be compared with a list');
   }
   const actual = computed.elements;
   const written = claimed.elements;
+  // Each written value has its own precision (1.62 and -0.618 in one list).
+  const placesOf = new Map<Scalar, number | undefined>(written.map((w, i) => [w, places(i)]));
+  const anyDecimals = written.some((w) => placesOf.get(w) !== undefined);
   const exactlySame = (w: Scalar, a: Scalar) => scalarsEqual(a, w);
-  const roughlySame = (w: Scalar, a: Scalar) => scalarsEqual(a, w) || (places !== undefined && roundsTo(a, w, places));
+  const roughlySame = (w: Scalar, a: Scalar) => {
+    if (scalarsEqual(a, w)) return true;
+    const p = placesOf.get(w);
+    return p !== undefined && roundsTo(a, w, p);
+  };
   const decide = (xs: readonly Scalar[], ys: readonly Scalar[]) => {
     if (matchAll(xs, ys, exactlySame)) return { equal: true, within: false };
-    return { equal: false, within: places !== undefined && matchAll(xs, ys, roughlySame) };
+    return { equal: false, within: anyDecimals && matchAll(xs, ys, roughlySame) };
   };
   if (written.length === actual.length) {
     // A multiset: every value with its algebraic multiplicity.

@@ -14,6 +14,7 @@ import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { before, describe, it } from 'node:test';
 import { assertBuilt, ROOT, runCli, runCliAsync } from './helpers';
+import { PYTHON } from '../support/python';
 
 const MATRICES: Record<string, number[][]> = {
   'J_2(4)': [
@@ -108,7 +109,7 @@ for case in json.load(sys.stdin):
     out.append(bad)
 print(json.dumps(out))
 `;
-  const python = process.env.MATRIX_NOTARY_PYTHON ?? 'python3';
+  const python = PYTHON;
   const run = spawnSync(python, ['-c', script], { input: JSON.stringify(cases), encoding: 'utf8', cwd: ROOT, timeout: 120_000 });
   assert.equal(
     run.status,

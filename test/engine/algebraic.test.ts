@@ -6,6 +6,7 @@ import { Poly } from '../../src/engine/poly';
 import { Rational } from '../../src/engine/rational';
 import { NumberField } from '../../src/engine/numberfield';
 import { spawnSync } from 'node:child_process';
+import { PYTHON } from '../support/python';
 
 const P = (...c: number[]) => Poly.fromInts(c);
 const q = (n: number, d = 1) => Rational.of(n, d);
@@ -170,7 +171,7 @@ test('the same-field shortcut agrees with arithmetic in the number field Q(√5)
   assert.ok(x.div(y).mul(y).equals(x));
 });
 
-const sympyMissing = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
+const sympyMissing = spawnSync(PYTHON, ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
   ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)'
   : false;
 
@@ -195,7 +196,7 @@ test('minimal polynomials of sums, products and quotients agree with SymPy', { s
     '    out.append([str(c) for c in reversed(m.all_coeffs())])',
     'print(json.dumps(out))',
   ].join('\n');
-  const run = spawnSync('python3', ['-c', script], { input: cases.map(([e]) => JSON.stringify(e)).join('\n'), encoding: 'utf8' });
+  const run = spawnSync(PYTHON, ['-c', script], { input: cases.map(([e]) => JSON.stringify(e)).join('\n'), encoding: 'utf8' });
   assert.equal(run.status, 0, run.stderr);
   const expected = JSON.parse(run.stdout) as string[][];
   cases.forEach(([text, build], k) => {

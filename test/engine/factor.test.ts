@@ -8,6 +8,7 @@ import { factorOverQ, isIrreducibleOverQ } from '../../src/engine/factor';
 import { Poly } from '../../src/engine/poly';
 import { Rational } from '../../src/engine/rational';
 import { Budget, BudgetError } from '../../src/engine/errors';
+import { PYTHON } from '../support/python';
 
 /** Reads "x^8 - 11*x^7 + 3*x - 5" (the oracle's plain-text style) into a Poly. */
 function parsePoly(text: string): Poly {
@@ -154,7 +155,7 @@ function lcg(seed: number): () => number {
   };
 }
 
-const sympy = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' });
+const sympy = spawnSync(PYTHON, ['-c', 'import sympy'], { encoding: 'utf8' });
 const sympyMissing = sympy.status !== 0 ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)' : false;
 
 test('random products of random factors agree with SymPy factor_list', { skip: sympyMissing }, () => {
@@ -187,7 +188,7 @@ test('random products of random factors agree with SymPy factor_list', { skip: s
     'print(json.dumps(out))',
   ].join('\n');
   const input = cases.map((p) => JSON.stringify(p.toIntegersClearingDenominators().coeffs.map(String).reverse())).join('\n');
-  const run = spawnSync('python3', ['-c', script], { input, encoding: 'utf8' });
+  const run = spawnSync(PYTHON, ['-c', script], { input, encoding: 'utf8' });
   assert.equal(run.status, 0, run.stderr);
   const expected = JSON.parse(run.stdout) as [string[], number][][];
   cases.forEach((p, i) => {

@@ -10,6 +10,7 @@ import { diskContains } from '../../src/engine/disk';
 import { squareFreePart } from '../../src/engine/poly';
 import { readFileSync, existsSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
+import { PYTHON } from '../support/python';
 
 const benchPath = '../shared/bench/matrices.json';
 
@@ -132,7 +133,7 @@ test('a complex pair 2·10^-20 apart next to a double root of the floating-point
   assert.deepEqual(roots.map((r) => r.realPartDecimal(25)), ['1.0000000000000000000000000', '1.0000000000000000000000000']);
 });
 
-const sympyMissing = spawnSync('python3', ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
+const sympyMissing = spawnSync(PYTHON, ['-c', 'import sympy'], { encoding: 'utf8' }).status !== 0
   ? 'python3 with sympy is not installed (Debian python3-sympy; .ci/run installs it)'
   : false;
 
@@ -160,7 +161,7 @@ test('root decimals agree with SymPy nroots at 30 digits', { skip: sympyMissing 
     'print(json.dumps(out))',
   ].join('\n');
   const input = cases.map((p) => JSON.stringify(p.coeffs.map((c) => c.toString()).reverse())).join('\n');
-  const run = spawnSync('python3', ['-c', script], { input, encoding: 'utf8' });
+  const run = spawnSync(PYTHON, ['-c', script], { input, encoding: 'utf8' });
   assert.equal(run.status, 0, run.stderr);
   const theirs = JSON.parse(run.stdout) as [string, string][][];
   const tolerance = Rational.of(1, 10n ** 24n);

@@ -15,6 +15,7 @@ import { pathToFileURL } from 'node:url';
 import { after, before, describe, it } from 'node:test';
 import { DiagnosticSeverity } from 'vscode-languageserver-protocol/node';
 import { ROOT, ServerSession } from './session';
+import { PYTHON } from '../support/python';
 
 /** Runs a command without a shell; fails the test with its output when it cannot start. */
 function run(command: string, args: string[], cwd: string, timeoutMs = 300_000) {
@@ -88,7 +89,7 @@ describe('npm run package and npm start in a copy of the working tree', () => {
   it('the check script rejects a package with a file the extension does not need', () => {
     const tampered = join(work, 'dist', 'tampered.vsix');
     const script = 'import shutil, sys, zipfile\nshutil.copy(sys.argv[1], sys.argv[2])\nwith zipfile.ZipFile(sys.argv[2], "a") as z:\n    z.writestr("extension/src/cli/main.ts", "// stray source")\n';
-    const python = process.env.MATRIX_NOTARY_PYTHON ?? 'python3';
+    const python = PYTHON;
     const made = run(python, ['-c', script, vsix, tampered], work);
     assert.equal(made.status, 0, made.stderr);
     const check = run(process.execPath, [join(work, 'scripts', 'check-vsix.mjs'), tampered], work);
@@ -111,7 +112,7 @@ describe('npm run package and npm start in a copy of the working tree', () => {
 
   it('runs the packaged language server from the unpacked .vsix: it publishes a failing claim', async () => {
     const unpacked = join(work, 'unpacked');
-    const python = process.env.MATRIX_NOTARY_PYTHON ?? 'python3';
+    const python = PYTHON;
     const extracted = run(python, ['-c', 'import sys, zipfile\nzipfile.ZipFile(sys.argv[1]).extractall(sys.argv[2])', vsix, unpacked], work);
     assert.equal(extracted.status, 0, extracted.stderr);
     const session = await ServerSession.start({ pullConfiguration: false, server: join(unpacked, 'extension', 'dist', 'server.js') });
