@@ -15,11 +15,34 @@ const common = {
   minify: process.argv.includes('--minify'),
 };
 
+/**
+ * No network module in the language server or the command line. The server's LSP library can
+ * also talk over a TCP socket or a named pipe (`--socket=N`, `--pipe=NAME`; its only use of
+ * `net`), which Matrix Notary never uses: the editor starts it over Node IPC, tests and other
+ * editors over stdio. `net` is replaced by a stub that refuses with a clear message, so nothing
+ * can open a connection; test/robustness/nothing-sent.test.ts scans the bundles for this.
+ */
+const noNetwork = {
+  name: 'no-network',
+  setup(b) {
+    b.onResolve({ filter: /^(node:)?net$/ }, () => ({ path: 'net', namespace: 'no-network' }));
+    b.onLoad({ filter: /.*/, namespace: 'no-network' }, () => ({
+      loader: 'js',
+      contents: [
+        'function refuse() {',
+        "  throw new Error('Matrix Notary speaks LSP over stdio (--stdio) or Node IPC (--node-ipc) only: socket and pipe transports are not included.');",
+        '}',
+        'module.exports = { createServer: refuse, createConnection: refuse, connect: refuse };',
+      ].join('\n'),
+    }));
+  },
+};
+
 await Promise.all([
   build({ ...common, entryPoints: ['src/extension/main.ts'], outfile: 'dist/extension.js', external: ['vscode'] }),
-  build({ ...common, entryPoints: ['src/server/main.ts'], outfile: 'dist/server.js' }),
-  build({ ...common, entryPoints: ['src/server/worker.ts'], outfile: 'dist/checkWorker.js' }),
-  build({ ...common, entryPoints: ['src/cli/main.ts'], outfile: 'dist/cli.js', banner: { js: '#!/usr/bin/env node' } }),
+  build({ ...common, entryPoints: ['src/server/main.ts'], outfile: 'dist/server.js', plugins: [noNetwork] }),
+  build({ ...common, entryPoints: ['src/server/worker.ts'], outfile: 'dist/checkWorker.js', plugins: [noNetwork] }),
+  build({ ...common, entryPoints: ['src/cli/main.ts'], outfile: 'dist/cli.js', plugins: [noNetwork], banner: { js: '#!/usr/bin/env node' } }),
 ]);
 chmodSync('dist/cli.js', 0o755);
 
