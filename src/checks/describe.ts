@@ -112,9 +112,17 @@ export function renderFacts(
   } else if (facts.notes.jordan) {
     md.push(`- Jordan form: ${facts.notes.jordan}`);
   }
+  if (facts.realJordan) {
+    md.push(`- real Jordan form (blocks [a, −b; b, a] for λ = a ± bi; verified):`);
+    md.push('```text\n' + block('J = ', facts.realJordan.J) + '\n\n' + block('X = ', facts.realJordan.X) + '\n```');
+    sections.push({
+      title: 'Real Jordan form (verified: X⁻¹AX = J, X real)',
+      latex: `J_{\\mathbb{R}} = ${matrixLatex(facts.realJordan.J, LATEX_STYLE)},\\qquad X_{\\mathbb{R}} = ${matrixLatex(facts.realJordan.X, LATEX_STYLE)}`,
+    });
+  }
   if (facts.chevalley) {
     const { D, N, index } = facts.chevalley;
-    md.push(`- ${label} = D + N, D diagonalisable, N nilpotent, DN = ND, N^${index} = 0:`);
+    md.push(index <= 1 ? `- ${label} = D + N with N = 0: ${label} is diagonalisable (over the complex numbers)` : `- ${label} = D + N, D diagonalisable, N nilpotent, DN = ND, N^${index} = 0 (index of nilpotency ${index}):`);
     md.push('```text\n' + block('D = ', fromRationalMatrix(D)) + '\n\n' + block('N = ', fromRationalMatrix(N)) + '\n```');
     sections.push({
       title: `Jordan–Chevalley split ${label} = D + N (DN = ND, index of nilpotency ${index})`,

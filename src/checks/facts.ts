@@ -11,6 +11,7 @@ import {
   EngineError,
   jordanChevalley,
   jordanForm,
+  realJordanForm,
   Matrix,
   Poly,
   rank,
@@ -48,6 +49,8 @@ export interface MatrixFacts {
   readonly eigen?: readonly EigenGroup[];
   /** J and X over one field (rational or one quadratic field), verified: X⁻¹AX = J. */
   readonly jordan?: { readonly J: Matrix<Scalar>; readonly X: Matrix<Scalar> };
+  /** For a real matrix with complex eigenvalues: the real Jordan form and its real X (verified). */
+  readonly realJordan?: { readonly J: Matrix<Scalar>; readonly X: Matrix<Scalar> };
   readonly chevalley?: { readonly D: Matrix<Rational>; readonly N: Matrix<Rational>; readonly index: number };
   readonly exponential?: Matrix<Scalar>;
   readonly stability?: StabilityResult;
@@ -106,6 +109,18 @@ export function matrixFacts(m: Matrix<Rational>, config: CheckerConfig, budget: 
   } catch (error) {
     notes.jordan = reason(error);
   }
+  let realJordan: MatrixFacts['realJordan'];
+  if (jd && (eigen ?? []).some((g) => g.roots.some((r) => !(r instanceof Rational) && !r.isReal()))) {
+    try {
+      const real = realJordanForm(jd, m, budget);
+      const K = real.field;
+      const alpha = K.factor.degree() > 1 ? AlgebraicNumber.rootOf(K.factor, 0) : undefined;
+      const conv = (x: Matrix<unknown>) => Matrix.fromEntries(SCALAR, x.rows, x.cols, x.entries.map((e) => num(toNum(K, e, alpha))));
+      realJordan = { J: conv(real.J as Matrix<unknown>), X: conv(real.X as Matrix<unknown>) };
+    } catch (error) {
+      notes.realJordan = reason(error);
+    }
+  }
   let chevalley: MatrixFacts['chevalley'];
   try {
     const split = jordanChevalley(m, s.charpoly, budget);
@@ -131,6 +146,7 @@ export function matrixFacts(m: Matrix<Rational>, config: CheckerConfig, budget: 
     spectrum: s,
     eigen,
     ...(jordan ? { jordan } : {}),
+    ...(realJordan ? { realJordan } : {}),
     ...(chevalley ? { chevalley } : {}),
     ...(exponential ? { exponential } : {}),
     ...(stable ? { stability: stable } : {}),
