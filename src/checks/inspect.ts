@@ -3,61 +3,17 @@
  * makes a statement a claim), is it a literal value (which a fix may replace), and how was it
  * written (decimals, fractions, matrix environment), so that corrections read like the note.
  */
-import type { Expr, MatrixEnvironment } from '../notation/index';
+import { childrenOf, walkExpr, type Expr, type MatrixEnvironment } from '../notation/index';
 import type { Environment } from './environment';
 import type { PrintStyle } from './print';
 
 const MATRIX_FUNCTIONS = new Set(['det', 'trace', 'rank', 'nullity', 'charpoly', 'minpoly', 'spectrum', 'diag', 'jordanBlock']);
 
-/** Calls `visit` on every node of the tree (iteratively, so deep trees cannot overflow the stack). */
-export function walk(root: Expr, visit: (e: Expr) => boolean | void): void {
-  const stack: Expr[] = [root];
-  while (stack.length) {
-    const e = stack.pop()!;
-    if (visit(e) === false) continue;
-    for (const child of children(e)) stack.push(child);
-  }
-}
+/** Calls `visit` on every node (parents first, iteratively); returning false skips its children. */
+export const walk = walkExpr;
 
 /** The direct children of a node. */
-export function children(e: Expr): Expr[] {
-  switch (e.kind) {
-    case 'fraction':
-      return [e.numerator, e.denominator];
-    case 'identity':
-      return e.size ? [e.size] : [];
-    case 'negate':
-    case 'transpose':
-    case 'conjugateTranspose':
-    case 'factorial':
-      return [e.operand];
-    case 'plusMinus':
-      return e.left ? [e.left, e.right] : [e.right];
-    case 'add':
-    case 'subtract':
-    case 'multiply':
-    case 'directSum':
-      return [e.left, e.right];
-    case 'power':
-      return [e.base, e.exponent];
-    case 'sqrt':
-      return e.index ? [e.radicand, e.index] : [e.radicand];
-    case 'group':
-      return [e.inner];
-    case 'tuple':
-    case 'set':
-    case 'list':
-      return e.elements;
-    case 'apply':
-      return [...e.args, ...(e.subscript ? [e.subscript] : []), ...(e.nameSuperscript ? [e.nameSuperscript] : [])];
-    case 'matrix':
-      return e.rows.flat();
-    case 'indexed':
-      return [e.base, e.index];
-    default:
-      return [];
-  }
-}
+export const children = childrenOf;
 
 /** True when the expression mentions a defined matrix, a matrix literal or a matrix operation. */
 export function involvesMatrix(e: Expr, env: Environment): boolean {
