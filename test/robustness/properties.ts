@@ -109,6 +109,27 @@ function checkChecker(note: GeneratedNote, timeBudgetMs: number): void {
   assert.deepEqual(internal, [], `${note.origin}: the checker met an internal error`);
 }
 
+/** Hover and panel: describing whatever is at any offset answers or says nothing, inside the document. */
+function checkDescribe(note: GeneratedNote, offsetSeed: number, timeBudgetMs: number): void {
+  const checker = createChecker({ config: smallBudget(timeBudgetMs) });
+  // Half the time on a capital letter or a matrix environment, so descriptions are often found.
+  const capitals = [...note.text.matchAll(/[A-Z]|\\begin\{[pbBvV]?matrix/g)].map((m) => m.index ?? 0);
+  const offset = offsetSeed % 2 === 0 && capitals.length ? capitals[(offsetSeed >> 1) % capitals.length] : offsetSeed % (note.text.length + 1);
+  const d = checker.describeAt(note.text, note.language, offset, { stability: offsetSeed % 4 < 2 ? 'discrete' : 'continuous' });
+  if (!d) return;
+  assertRange(note.text, d.start, d.end, `${note.origin}: description at ${offset}`);
+  assert.ok(d.markdown.length > 0, 'a description has hover text');
+  for (const section of d.sections) assert.ok(section.title.length > 0, 'every panel section has a title');
+}
+
+/** `decompose` of any text (the command line's MATRIX argument) answers with a result or an error. */
+function checkDecompose(source: string, format: 'text' | 'latex' | 'json'): void {
+  const r = createChecker({ config: smallBudget(50) }).decompose(source, format);
+  if (r.ok) assert.ok(typeof r.text === 'string' && r.text.length > 0, 'a decomposition has text');
+  else assert.ok(r.error.length > 0, 'a refusal says why');
+  if (format === 'json' && r.ok) JSON.parse(r.text);
+}
+
 /** The properties, built over the current fixture notes and examples. */
 export function robustnessProperties(): NamedProperty[] {
   const notes = sourceNotes();
@@ -148,7 +169,29 @@ export function robustnessProperties(): NamedProperty[] {
       name: 'the checker answers documents of bare delimiters and fences',
       property: erase(fc.property(pieceDocument, (note) => checkChecker(note, 50))),
       testRuns: 400,
-      fuzzWeight: 0.13,
+      fuzzWeight: 0.1,
+    },
+    {
+      name: 'describing any offset of a mutated note window (hover, panel) answers inside the document or says nothing',
+      property: erase(fc.property(mutatedNote(notes, { maxWindow: 3000, maxMutations: 3 }), fc.nat(), (note, offset) => checkDescribe(note, offset, 50))),
+      testRuns: 100,
+      fuzzWeight: 0.05,
+    },
+    {
+      name: 'decomposing any matrix text (JSON rows, LaTeX, loose math) answers or refuses with a reason',
+      property: erase(
+        fc.property(
+          fc.oneof(
+            looseMath,
+            fc.json(),
+            fc.array(fc.array(fc.oneof(fc.integer({ min: -9, max: 9 }), fc.constantFrom('"1/3"', '"\\\\sqrt{2}"', '0.5', '"x"', 'null')), { minLength: 1, maxLength: 4 }), { minLength: 1, maxLength: 4 }).map((rows) => `[${rows.map((r) => `[${r.join(', ')}]`).join(', ')}]`),
+          ),
+          fc.constantFrom('text' as const, 'latex' as const, 'json' as const),
+          checkDecompose,
+        ),
+      ),
+      testRuns: 300,
+      fuzzWeight: 0.03,
     },
   ];
 }
