@@ -13,7 +13,10 @@
  */
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
+import { type CodeAction, type TextEdit } from 'vscode-languageserver-protocol/node';
+import { createChecker, defaultCheckerConfig } from '../../src/checks/index';
 import { positionOf, ServerSession, withDeadline } from '../server/session';
+import { applyEdits } from './support';
 
 /** A dense 200×200 matrix (entries −9…9 from a linear congruential generator) and heavy claims. */
 function heavyNote(variant: number): string {
@@ -27,6 +30,26 @@ function heavyNote(variant: number): string {
   for (let k = 2; k < 40; k++) text += `Mode ${k}: $\\chi_{M^{${k}}}(\\lambda) = \\lambda^{200}$ and $(M^{${k}})^{-1} = I$.\n\n`;
   return text;
 }
+
+/**
+ * The offset of an LSP position: lines end at CRLF, LF or a lone CR (LSP 3.17, "Text Documents"),
+ * characters count UTF-16 code units.
+ */
+function offsetAt(text: string, position: { line: number; character: number }): number {
+  let line = 0;
+  let at = 0;
+  while (line < position.line && at < text.length) {
+    const c = text[at++];
+    if (c === '\r' && text[at] === '\n') at++;
+    if (c === '\r' || c === '\n') line++;
+  }
+  return at + position.character;
+}
+
+// A = [[1, 2], [3, 4]]: det −2, trace 5 (by hand; common practice, no source).
+const MIXED_ENDINGS =
+  '# Größe des Rahmens 𝔸 😀\r\n\r\n$$A = \\begin{pmatrix} 1 & 2 \\\\ 3 & 4 \\end{pmatrix}$$\r\n\r\n' +
+  'Then 😀 $\\det A = 5$ and $\\operatorname{tr} A = 4$.\r\n\r\nAn old line\rwith a lone CR, 𝐱 and $\\det A = 7$.\n\nLast, $\\operatorname{tr} A = 5$.\r\n';
 
 const SMALL = '$$D = \\begin{pmatrix} 2 & 0 \\\\ 0 & 5 \\end{pmatrix}$$\n\nSo $\\det D = 11$.\n';
 const HEAVY_URI = 'file:///notes/frame-survey.md';
@@ -76,5 +99,23 @@ describe('language server on a pathological note', () => {
     // The small note's check was queued behind the heavy one; it is answered too.
     const small = await session.diagnosticsFor(SMALL_URI, 1, PROMPT_DEADLINE_MS);
     assert.deepEqual(small.map((d) => d.code), ['det.mismatch']);
+  });
+
+  it('fix-all on a note with CRLF, LF and lone CR line endings and astral text edits exactly the claimed values', async () => {
+    const uri = 'file:///notes/rahmen.md';
+    await session.open(uri, 'markdown', MIXED_ENDINGS);
+    const diagnostics = await session.diagnosticsFor(uri, 1, PROMPT_DEADLINE_MS);
+    assert.equal(diagnostics.length, 3, JSON.stringify(diagnostics.map((d) => d.message)));
+    const actions = (await session.codeActions(uri, [], ['source.fixAll'])) as CodeAction[];
+    const edits: TextEdit[] = actions[0]?.edit?.changes?.[uri] ?? [];
+    const fixed = applyEdits(
+      MIXED_ENDINGS,
+      edits.map((e) => ({ offset: offsetAt(MIXED_ENDINGS, e.range.start), length: offsetAt(MIXED_ENDINGS, e.range.end) - offsetAt(MIXED_ENDINGS, e.range.start), text: e.newText })),
+    );
+    // The same as applying the checker's own fixes by offset: the protocol's line/character mapping loses nothing.
+    const doc = createChecker({ config: defaultCheckerConfig }).checkDocument(MIXED_ENDINGS, 'markdown');
+    const expected = applyEdits(MIXED_ENDINGS, doc.claims.filter((c) => c.verdict === 'fails' && c.fix).map((c) => c.fix!));
+    assert.equal(fixed, expected);
+    assert.equal(fixed, MIXED_ENDINGS.replace('\\det A = 5$', '\\det A = -2$').replace('\\operatorname{tr} A = 4$', '\\operatorname{tr} A = 5$').replace('\\det A = 7$', '\\det A = -2$'));
   });
 });
