@@ -28,4 +28,21 @@ describe('known robustness bugs (reported)', () => {
       for (const p of checked.problems) assertRange(note, p.start, p.end, `problem ${p.code}`, true);
     },
   );
+
+  it(
+    'a claimed polynomial raised to a large power stops when the budget says so',
+    { todo: 'reported to checks: powScalar (src/checks/scalar.ts) and MPoly.pow take no Budget, so "(\\lambda + 1)^{4000}" runs ~9 s past a 100 ms budget and (x + y + z)^{10000} for hours; cancellation is not seen either' },
+    () => {
+      // Cancelled before it starts: every budgeted computation stops at its first poll of the flag.
+      // A = [[1, 2], [3, 4]] has χ_A(λ) = λ² − 5λ − 2 (2×2 by hand: λ² − tr·λ + det; common practice, no source).
+      const note = '$$A = \\begin{pmatrix} 1 & 2 \\\\ 3 & 4 \\end{pmatrix}$$\n\n$$\\chi_A(\\lambda) = (\\lambda + 1)^{1500}$$\n';
+      const checked = createChecker().checkDocument(note, 'markdown', { isCancelled: () => true });
+      assertCheckedDocument(note, checked, 'a large power of a claimed polynomial');
+      assert.deepEqual(
+        checked.claims.map((c) => [c.verdict, c.code]),
+        [['unchecked', 'unchecked.budget']],
+        'the expansion of (λ + 1)^1500 polls the budget and stops when cancelled',
+      );
+    },
+  );
 });
