@@ -7,6 +7,9 @@ import { AlgebraicNumber, Budget, charpolyBerkowitz, determinant as engineDeterm
 import { asRational, conjugateScalar, fromSymbolic, num, powScalar, SCALAR, type Scalar } from './scalar';
 import { scalarValue, shapeText, Undecidable, type Value } from './values';
 
+/** Largest exponent of a polynomial, rational function or exponential expression that is expanded. */
+const MAX_SYMBOLIC_POWER = 64;
+
 /** The rational matrix with the same entries, when every entry is rational. */
 export function toRationalMatrix(m: Matrix<Scalar>): Matrix<Rational> | undefined {
   const entries: Rational[] = [];
@@ -121,6 +124,10 @@ export function power(a: Value, k: number, budget: Budget): Value {
   }
   if (a.kind === 'scalar') {
     if (k < 0 && SCALAR.isZero(a.value)) throw new Undecidable('unchecked.division-by-zero', '0 has no negative powers');
+    if (a.value.k !== 'num' && Math.abs(k) > MAX_SYMBOLIC_POWER) {
+      // (λ + 1)^{4000} expands to thousands of terms of huge coefficients: refused up front.
+      throw new Undecidable('unchecked.budget', `the power ${k} of an expression in variables is over the size budget (${MAX_SYMBOLIC_POWER})`);
+    }
     return scalarValue(powScalar(a.value, k));
   }
   if (a.kind === 'matrix') {
@@ -132,6 +139,7 @@ export function power(a: Value, k: number, budget: Budget): Value {
     }
     const r = toRationalMatrix(base);
     if (r) return { kind: 'matrix', value: fromRationalMatrix(r.pow(k, budget)) };
+    if (k > MAX_SYMBOLIC_POWER) throw new Undecidable('unchecked.budget', `the power ${k} of a matrix with variables is over the size budget (${MAX_SYMBOLIC_POWER})`);
     return { kind: 'matrix', value: base.pow(k, budget) };
   }
   throw new Undecidable('unchecked.unsupported', 'a list has no powers');

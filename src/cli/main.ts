@@ -33,8 +33,16 @@ function runCheck(cmd: CheckCommand, io: Io): number {
   notes.forEach((note, i) => {
     if (showProgress) io.err(`\r\x1b[Kchecking ${i + 1}/${notes.length} ${note.displayPath}`);
     let text: string;
+    let validUtf8 = true;
     try {
-      text = readFileSync(note.absolutePath, 'utf8');
+      const bytes = readFileSync(note.absolutePath);
+      try {
+        text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(bytes);
+      } catch {
+        // Checked as well as it reads, but never rewritten: writing it back would replace bytes.
+        validUtf8 = false;
+        text = new TextDecoder('utf-8', { ignoreBOM: true }).decode(bytes);
+      }
     } catch (error) {
       fileError = true;
       files.push({ path: note.displayPath, text: '', result: { claims: [], definitions: [], problems: [] }, readError: `cannot read (${(error as NodeJS.ErrnoException).code ?? 'error'})` });
@@ -43,7 +51,10 @@ function runCheck(cmd: CheckCommand, io: Io): number {
     let result = checker.checkDocument(text, note.language);
     if (cmd.fix) {
       const edits = result.claims.filter((c) => c.verdict === 'fails' && c.fix).map((c) => c.fix!);
-      if (edits.length) {
+      if (edits.length && !validUtf8) {
+        fileError = true;
+        io.err(`matrix-notary: ${note.displayPath}: not valid UTF-8, so it was not rewritten (${edits.length} fix${edits.length === 1 ? '' : 'es'} not applied)\n`);
+      } else if (edits.length) {
         const { text: fixed, applied } = applyEdits(text, edits);
         const index = lineIndex(text);
         try {

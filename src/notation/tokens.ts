@@ -123,7 +123,9 @@ export function tokenize(text: string, from: number, to: number, map: OffsetMap 
       if (j < to && isLetter(text[j]!)) {
         while (j < to && isLetter(text[j]!)) j++;
       } else if (j < to) {
-        j++;
+        // One character after the backslash: a whole code point, never half a surrogate pair.
+        const code = text.charCodeAt(j);
+        j += code >= 0xd800 && code <= 0xdbff && j + 1 < to && (text.charCodeAt(j + 1) & 0xfc00) === 0xdc00 ? 2 : 1;
       }
       const name = text.slice(i, j);
       if (name === '\\') {

@@ -156,22 +156,29 @@ documents.onDidClose((e) => {
   void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
 });
 
-async function describe(uri: string, position: { line: number; character: number }) {
+/** The hover or panel request in flight: a newer one makes it stale. */
+let pendingQuery: JobHandle | undefined;
+
+async function describe(uri: string, position: { line: number; character: number }, token?: { onCancellationRequested(listener: () => void): unknown }) {
   const document = documents.get(uri);
   const language = document && languageOf(document);
   if (!document || !language) return undefined;
+  pendingQuery?.cancel();
   const handle = queryLane.submit(
     { kind: 'describe', text: document.getText(), language, offset: document.offsetAt(position), stability: settings.stability, config: settings.checker },
     deadlineMs(),
   );
+  pendingQuery = handle;
+  token?.onCancellationRequested(() => handle.cancel());
   const reply = await handle.result;
+  if (pendingQuery === handle) pendingQuery = undefined;
   if (reply.kind === 'describe') return { document, description: reply.result };
   if (reply.kind === 'error' && reply.message !== 'cancelled') connection.console.error(`Matrix Notary could not describe: ${reply.message}`);
   return undefined;
 }
 
 connection.onHover(async (params, token) => {
-  const found = await describe(params.textDocument.uri, params.position);
+  const found = await describe(params.textDocument.uri, params.position, token);
   if (!found?.description || token.isCancellationRequested) return null;
   const { document, description } = found;
   const range = { start: document.positionAt(description.start), end: document.positionAt(description.end) };

@@ -6,6 +6,9 @@
 import { Worker } from 'node:worker_threads';
 import type { WorkerJob, WorkerReply } from './protocol';
 
+/** How long a cancelled job may keep running before its worker is replaced. */
+const CANCEL_GRACE_MS = 250;
+
 type JobInput = WorkerJob extends infer J ? (J extends WorkerJob ? Omit<J, 'id' | 'cancel'> : never) : never;
 
 interface Pending {
@@ -51,6 +54,16 @@ export class WorkerLane {
         if (index >= 0) {
           const [p] = this.queue.splice(index, 1);
           p.resolve({ id, kind: 'error', message: 'cancelled' });
+        } else if (this.running?.id === id) {
+          // Work that does not poll the flag (reading a huge note) must not hold up the lane:
+          // a job still running shortly after its cancellation gets the worker replaced.
+          setTimeout(() => {
+            if (this.running?.id !== id) return;
+            const worker = this.worker;
+            this.worker = undefined;
+            this.fail('cancelled');
+            void worker?.terminate();
+          }, CANCEL_GRACE_MS);
         }
       },
     };
@@ -66,10 +79,17 @@ export class WorkerLane {
   private ensureWorker(): Worker {
     if (this.worker) return this.worker;
     const worker = new Worker(this.script);
-    worker.on('message', (reply: WorkerReply) => this.finish(reply));
-    worker.on('error', (error) => this.fail(`the checker stopped: ${error.message}`));
+    worker.on('message', (reply: WorkerReply) => {
+      if (this.worker === worker) this.finish(reply);
+    });
+    // Only the current worker's death fails the running job: a replaced worker exits later, when
+    // the lane has already moved on to a job of the new one.
+    worker.on('error', (error) => {
+      if (this.worker === worker) this.fail(`the checker stopped: ${error.message}`);
+    });
     worker.on('exit', () => {
-      if (this.worker === worker) this.worker = undefined;
+      if (this.worker !== worker) return;
+      this.worker = undefined;
       if (this.running) this.fail('the checker stopped unexpectedly');
     });
     this.worker = worker;

@@ -1,4 +1,3 @@
-/* global setTimeout, clearTimeout, URLSearchParams */
 // Launches a real VS Code for the editor tests: code-server 4.100.3 (VS Code's browser build with a
 // real Node extension host) driven by Debian's Chromium through playwright-core, all installed by
 // scripts/editor-tools.sh into .editor-tools/. Facts behind each step: ../shared/EDITOR-TESTING.md.
