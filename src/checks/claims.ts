@@ -310,7 +310,9 @@ function decideClaim(link: Link, statement: Statement, ctx: StatementContext): C
   }
   const baseStyle = styleOf(claimedExpr, ctx.env.lookup(firstMatrixKey(computedExpr) ?? '')?.environment);
   // An `=` claim's correct value must be exact; an `\approx` claim's is rounded to the written places.
-  const style = relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true };
+  let writesPlusMinus = false;
+  walk(claimedExpr, (n) => void (n.kind === 'plusMinus' && (writesPlusMinus = true)));
+  const style = { ...(relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true }), ...(writesPlusMinus ? { plusMinus: true } : {}) };
   const claimedPlaces = entryPlaces(claimedExpr, relation === 'approx');
   let comparison;
   try {

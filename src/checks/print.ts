@@ -2,7 +2,7 @@
  * Values → LaTeX and plain text, in the user's style: the matrix environment they used, decimals
  * when they wrote decimals (rounded to their number of places), `\frac` or `a/b` as they wrote.
  */
-import type { Matrix } from '../engine/index';
+import { AlgebraicNumber, Rational, radicalToLatex, type Matrix } from '../engine/index';
 import { exactDecimal, formatScalar } from './print-scalar';
 import type { MatrixEnvironment } from '../notation/index';
 import { asRational, SCALAR, type Scalar } from './scalar';
@@ -18,6 +18,8 @@ export interface PrintStyle {
   readonly decimalPlaces?: number;
   /** With decimalPlaces: print exact values (a terminating decimal in full, else the exact form). */
   readonly decimalExact?: boolean;
+  /** Eigenvalue lists: write conjugate pairs a ± b as the note does (`1 \pm \sqrt{2}`, `-1 \pm 2i`). */
+  readonly plusMinus?: boolean;
   /** `\frac{p}{q}` (default), `\dfrac`, `\tfrac`, or `p/q`. */
   readonly fraction: 'frac' | 'dfrac' | 'tfrac' | 'slash';
 }
@@ -85,7 +87,7 @@ export function valueLatex(v: Value, style: PrintStyle = defaultStyle): string {
     case 'identity':
       return SCALAR_IS_ONE(v.factor) ? 'I' : `${scalarLatex(v.factor, style)} I`;
     case 'list':
-      return `\\{${v.elements.map((e) => scalarLatex(e, style)).join(', ')}\\}`;
+      return `\\{${(style.plusMinus ? pairedLatex(v.elements, style) : v.elements.map((e) => scalarLatex(e, style))).join(', ')}\\}`;
   }
 }
 
@@ -101,4 +103,37 @@ export function valueText(v: Value, style: PrintStyle = defaultStyle): string {
     case 'list':
       return `{${v.elements.map((e) => scalarText(e, style)).join(', ')}}`;
   }
+}
+
+/**
+ * List entries with each pair a + b, a − b of quadratic conjugates written once as `a \pm b`
+ * (radicals exactly; with decimals, each part rounded), the rest as they are.
+ */
+function pairedLatex(elements: readonly Scalar[], style: PrintStyle): string[] {
+  const out: string[] = [];
+  const used = new Set<number>();
+  elements.forEach((x, i) => {
+    if (used.has(i)) return;
+    const rx = x.k === 'num' && x.v instanceof AlgebraicNumber ? x.v.toRadical() : undefined;
+    if (rx) {
+      const j = elements.findIndex((y, k) => {
+        if (k === i || used.has(k) || y.k !== 'num' || !(y.v instanceof AlgebraicNumber)) return false;
+        const ry = y.v.toRadical();
+        return !!ry && ry.d === rx.d && ry.a.equals(rx.a) && ry.b.equals(rx.b.neg());
+      });
+      if (j >= 0) {
+        used.add(i).add(j);
+        const half = radicalToLatex({ a: Rational.ZERO, b: rx.b.abs(), d: rx.d });
+        const center = rx.a.isZero() ? '' : `${scalarLatex({ k: 'num', v: rx.a }, style)} `;
+        if (style.decimalPlaces !== undefined && !style.decimalExact) {
+          const body = scalarLatex({ k: 'num', v: AlgebraicNumber.fromRadical({ a: Rational.ZERO, b: rx.b.abs(), d: rx.d }) }, style);
+          out.push(`${center}\\pm ${body}`);
+        } else out.push(`${center}\\pm ${half}`);
+        return;
+      }
+    }
+    used.add(i);
+    out.push(scalarLatex(x, style));
+  });
+  return out;
 }
