@@ -312,7 +312,14 @@ function decideClaim(link: Link, statement: Statement, ctx: StatementContext): C
   // An `=` claim's correct value must be exact; an `\approx` claim's is rounded to the written places.
   let writesPlusMinus = false;
   walk(claimedExpr, (n) => void (n.kind === 'plusMinus' && (writesPlusMinus = true)));
-  const style = { ...(relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true }), ...(writesPlusMinus ? { plusMinus: true } : {}) };
+  // `e^{-2t}\begin{pmatrix}…\end{pmatrix}`: the note factors an exponential out of a matrix.
+  const claimedTop = unwrap(claimedExpr);
+  const factorsExponential = claimedTop.kind === 'multiply' && unwrap(claimedTop.left).kind === 'apply' && (unwrap(claimedTop.left) as { func?: string }).func === 'exp' && unwrap(claimedTop.right).kind === 'matrix';
+  const style = {
+    ...(relation === 'approx' ? baseStyle : { ...baseStyle, decimalExact: true }),
+    ...(writesPlusMinus ? { plusMinus: true } : {}),
+    ...(factorsExponential ? { factorExponential: true } : {}),
+  };
   const claimedPlaces = entryPlaces(claimedExpr, relation === 'approx');
   let comparison;
   try {

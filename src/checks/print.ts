@@ -5,7 +5,8 @@
 import { AlgebraicNumber, Rational, radicalToLatex, type Matrix } from '../engine/index';
 import { exactDecimal, formatScalar } from './print-scalar';
 import type { MatrixEnvironment } from '../notation/index';
-import { asRational, SCALAR, type Scalar } from './scalar';
+import { asRational, expScalar, num, SCALAR, symbol, type Scalar } from './scalar';
+import { NUM, type Num } from './number';
 
 const SCALAR_IS_ONE = (s: Scalar) => SCALAR.equals(s, SCALAR.one);
 import type { Value } from './values';
@@ -20,6 +21,8 @@ export interface PrintStyle {
   readonly decimalExact?: boolean;
   /** Eigenvalue lists: write conjugate pairs a ± b as the note does (`1 \pm \sqrt{2}`, `-1 \pm 2i`). */
   readonly plusMinus?: boolean;
+  /** Matrices of exponentials: factor out a common e^{λt} as the note does (`e^{-2t}\begin{pmatrix}…`). */
+  readonly factorExponential?: boolean;
   /** `\frac{p}{q}` (default), `\dfrac`, `\tfrac`, or `p/q`. */
   readonly fraction: 'frac' | 'dfrac' | 'tfrac' | 'slash';
 }
@@ -37,8 +40,31 @@ export function scalarText(s: Scalar, style: PrintStyle = defaultStyle): string 
   return formatScalar(s, 'text', style);
 }
 
+/** The common rate λ and variable t when every non-zero entry is e^{λt} times a polynomial in t. */
+function commonExponential(m: Matrix<Scalar>): { rate: Num; t: string } | undefined {
+  let found: { rate: Num; t: string } | undefined;
+  for (const e of m.entries) {
+    if (SCALAR.isZero(e)) continue;
+    if (e.k !== 'exp' || e.t === null) return undefined;
+    for (const term of e.v.terms) {
+      if (!found) found = { rate: term.rate, t: e.t };
+      else if (found.t !== e.t || !NUM.equals(found.rate, term.rate)) return undefined;
+    }
+  }
+  return found && !NUM.isZero(found.rate) ? found : undefined;
+}
+
 /** A matrix as LaTeX in the given environment. */
 export function matrixLatex(m: Matrix<Scalar>, style: PrintStyle = defaultStyle): string {
+  if (style.factorExponential && style.environment !== 'json') {
+    const common = commonExponential(m);
+    if (common) {
+      const unit = expScalar(SCALAR.mul(num(NUM.neg(common.rate)), symbol(common.t)));
+      const inner = m.map(SCALAR, (x) => SCALAR.mul(x, unit));
+      const factor = scalarLatex(expScalar(SCALAR.mul(num(common.rate), symbol(common.t))), style);
+      return `${factor} ${matrixLatex(inner, { ...style, factorExponential: false })}`;
+    }
+  }
   const rows: string[] = [];
   for (let i = 0; i < m.rows; i++) {
     const cells: string[] = [];
