@@ -70,7 +70,6 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
   const relation = link.relation.kind;
   const isFirst = index === 0 && !statement.continued && !link.continued;
   if (relation === 'other') return undefined;
-  if (!ctx.definitionsOnly && isEquation(link, ctx)) return undefined;
 
   // `\pi = (…)` (a stationary distribution) binds π as a name, as Markov-chain notes write it.
   if (left.kind === 'constant' && left.name === 'pi' && (relation === 'defines' || (relation === 'equals' && isFirst && !ctx.env.lookup('\\pi')))) {
@@ -85,10 +84,11 @@ function processLink(link: Link, index: number, statement: Statement, ctx: State
     if (relation === 'defines' || !ctx.env.lookup(left.key)) return undefined;
   }
 
+  // Definitions are bound above, in both modes, so a cached re-check binds exactly what a full one does.
   if (ctx.definitionsOnly) return undefined;
+  if (isEquation(link, ctx)) return undefined;
   const involves = chainIsClaim || involvesMatrix(link.left, ctx.env) || involvesMatrix(link.right, ctx.env);
   if (!involves && relation !== 'similar') return undefined;
-  if (isEquation(link, ctx)) return undefined;
   return decideClaim(link, statement, ctx);
 }
 
