@@ -13,8 +13,8 @@
  */
 import fc from 'fast-check';
 import { checkPumpLog } from '../test/robustness/big-notes';
-import { assertFixpoint, staleClaimNote, VARIANTS, variantOf } from '../test/robustness/fixpoint';
-import { sourceNotes } from '../test/robustness/support';
+import { assertFixpoint, richClaimNote, staleClaimNote, VARIANTS, variantOf } from '../test/robustness/fixpoint';
+import { smallBudget, sourceNotes } from '../test/robustness/support';
 import { robustnessProperties } from '../test/robustness/properties';
 
 function option(name: string): string | undefined {
@@ -70,11 +70,16 @@ if (!only || 'fixpoint'.includes(only)) {
     { numRuns: Math.max(100, Math.ceil(total / 50)), seed },
   );
   if (generated.failed) problems.push(fc.defaultReportMessage(generated) ?? 'generated notes failed');
+  const rich = fc.check(
+    fc.property(richClaimNote, (n) => void assertFixpoint(n.text, n.language, `generated rich ${n.language} note`, smallBudget(300, 8))),
+    { numRuns: Math.max(100, Math.ceil(total / 100)), seed },
+  );
+  if (rich.failed) problems.push(fc.defaultReportMessage(rich) ?? 'generated rich notes failed');
   if (problems.length) {
     failed++;
     console.log(`FAIL  fixpoint of every fix (${problems.length} failure(s)):\n${problems.join('\n')}`);
   } else {
-    console.log(`ok    fixpoint of every fix: all notes in ${VARIANTS.length} variants, ${generated.numRuns} generated notes (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+    console.log(`ok    fixpoint of every fix: all notes in ${VARIANTS.length} variants, ${generated.numRuns + rich.numRuns} generated notes (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
   }
 }
 

@@ -17,8 +17,8 @@ import { join } from 'node:path';
 import { describe, it } from 'node:test';
 import fc from 'fast-check';
 import { createChecker, defaultCheckerConfig } from '../../src/checks/index';
-import { assertFixpoint, staleClaimNote, VARIANTS, variantOf, type Variant } from './fixpoint';
-import { applyEdits, ROOT, sourceNotes } from './support';
+import { assertFixpoint, richClaimNote, staleClaimNote, VARIANTS, variantOf, type Variant } from './fixpoint';
+import { applyEdits, ROOT, smallBudget, sourceNotes } from './support';
 
 const CLI = join(ROOT, 'dist', 'cli.js');
 
@@ -44,6 +44,18 @@ describe('applying every fix reaches a fixpoint and loses nothing', () => {
       { numRuns: 40, seed: 20261202 },
     );
     assert.ok(fixes > 40, `the generated notes offered fixes to apply (${fixes})`);
+  });
+
+  it('generated notes with fraction and decimal entries and every claim form: each fix reads back as a value that holds', () => {
+    let fixes = 0;
+    fc.assert(
+      fc.property(richClaimNote, (note) => {
+        // A small time budget keeps exponentials of 3×3 matrices with irrational eigenvalues quick.
+        fixes += assertFixpoint(note.text, note.language, `generated ${note.language} note`, smallBudget(300, 8)).edits.length;
+      }),
+      { numRuns: 4, seed: 20261202 },
+    );
+    assert.ok(fixes > 4, `the generated notes offered fixes to apply (${fixes})`);
   });
 
   it('check --fix on disk writes exactly the in-memory fixes: every byte outside them is kept (CRLF, BOM, astral text)', () => {

@@ -144,3 +144,60 @@ export const staleClaimNote: fc.Arbitrary<GeneratedClaimNote> = fc
     }
     return { text: crlf ? toCrlf(text) : text, language: latex ? ('latex' as const) : ('markdown' as const) };
   });
+
+/** A matrix entry as the user might write it: integers, fractions, decimals, signs. */
+const entryText = fc.oneof(
+  { weight: 6, arbitrary: fc.integer({ min: -5, max: 5 }).map(String) },
+  { weight: 1, arbitrary: fc.tuple(fc.integer({ min: -5, max: 5 }), fc.integer({ min: 2, max: 4 })).map(([p, q]) => `\\frac{${p}}{${q}}`) },
+  { weight: 1, arbitrary: fc.integer({ min: -20, max: 20 }).map((k) => (k / 2).toFixed(1)) },
+);
+
+/** An n×n matrix literal with `diagonal` on the diagonal and `off` elsewhere. */
+function literal(n: number, diagonal: string, off = '0'): string {
+  return `\\begin{pmatrix} ${Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? diagonal : off)).join(' & ')).join(' \\\\ ')} \\end{pmatrix}`;
+}
+
+/** The claim forms of SPEC §3 about a defined n×n matrix A (and B), each with a stale claimed value. */
+const claimForm = fc.constantFrom(
+  (v: string) => `\\det A = ${v}`,
+  (v: string) => `\\operatorname{tr} A = ${v}`,
+  (v: string) => `\\operatorname{rank} A = ${v}`,
+  (v: string, n: number) => `\\sigma(A) = \\{${Array.from({ length: n }, (_, k) => String(Number(v) + k)).join(', ')}\\}`,
+  (v: string) => `\\chi_A(\\lambda) = \\lambda^{2} - ${v}`,
+  (v: string) => `\\mu_A(\\lambda) = \\lambda - ${v}`,
+  (v: string, n: number) => `A^{-1} = ${literal(n, v, '1')}`,
+  (v: string, n: number) => `A^{2} = ${literal(n, v)}`,
+  (v: string, n: number) => `A^{3} - A = ${literal(n, v, '-1')}`,
+  (v: string, n: number) => `A^{T} B = ${literal(n, v, '\\frac{1}{2}')}`,
+  (v: string) => `\\det (A - ${v} I) = 0`,
+  (v: string) => `\\operatorname{tr}(A B) = ${v}`,
+  (v: string, n: number) => `e^{At} = ${literal(n, `e^{${v} t}`)}`,
+  (v: string, n: number) => `A \\sim ${Array.from({ length: n }, () => `J_{1}(${v})`).join(' \\oplus ')}`,
+  (v: string) => `\\det e^{A} = e^{${v}}`,
+  (v: string) => `\\operatorname{tr} A \\approx ${v}.25`,
+);
+
+/**
+ * Richer notes: square matrices of size 2 to 3 with integer, fraction and decimal entries (so
+ * eigenvalues may be irrational or complex and values print with radicals, fractions, decimals,
+ * cos/sin), and claims of every form above with random claimed values. The fixpoint oracle: each
+ * fix, printed in the user's style, must read back as a value that makes its claim hold.
+ */
+export const richClaimNote: fc.Arbitrary<GeneratedClaimNote> = fc
+  .record({
+    n: fc.integer({ min: 2, max: 3 }),
+    a: fc.array(entryText, { minLength: 9, maxLength: 9 }),
+    b: fc.array(entryText, { minLength: 9, maxLength: 9 }),
+    forms: fc.array(fc.tuple(claimForm, fc.integer({ min: -4, max: 6 })), { minLength: 1, maxLength: 6 }),
+    latex: fc.boolean(),
+    crlf: fc.boolean(),
+  })
+  .map(({ n, a, b, forms, latex, crlf }) => {
+    const rows = (xs: string[]) => Array.from({ length: n }, (_, i) => xs.slice(i * n, i * n + n).join(' & ')).join(' \\\\ ');
+    const defs = `A = \\begin{pmatrix} ${rows(a)} \\end{pmatrix}, \\quad B = \\begin{pmatrix} ${rows(b)} \\end{pmatrix}`;
+    const claims = forms.map(([form, v]) => form(String(v), n));
+    const text = latex
+      ? `\\documentclass{article}\n\\begin{document}\n${NON_ASCII_PROSE}\n\\[ ${defs} \\]\n${claims.map((c) => `Then $${c}$.\n`).join('\n')}\\end{document}\n`
+      : `${NON_ASCII_PROSE}\n\n$$${defs}$$\n\n${claims.map((c) => `$$${c}$$\n\n`).join('')}`;
+    return { text: crlf ? toCrlf(text) : text, language: latex ? ('latex' as const) : ('markdown' as const) };
+  });

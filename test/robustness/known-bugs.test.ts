@@ -1,6 +1,6 @@
 /**
- * Robustness bugs found by the properties and pathological inputs of this folder, kept as
- * regression tests now that they are fixed.
+ * Robustness bugs found by the properties, pathological inputs and fuzz runs of this folder, kept
+ * as regression tests now that they are fixed (an open one would run here as a `todo`).
  */
 import assert from 'node:assert/strict';
 import { describe, it } from 'node:test';
@@ -39,6 +39,19 @@ describe('known robustness bugs (reported)', () => {
         [['unchecked', 'unchecked.budget']],
         'the expansion of (λ + 1)^1500 polls the budget and stops when cancelled',
       );
+    },
+  );
+
+  it(
+    'a checker answers the same note the same way every time (a zero matrix definition)',
+    () => {
+      // det of the 2×2 zero matrix is 0 (common practice, no source).
+      const note = 'Notes.\n\n$$A = \\begin{pmatrix} 0 & 0 \\\\ 0 & 0 \\end{pmatrix}$$\n\nThen $\\det A = 0$, noted.\n';
+      const checker = createChecker();
+      const first = checker.checkDocument(note, 'markdown');
+      const second = checker.checkDocument(note, 'markdown');
+      assert.deepEqual(first, second, 'the same answer twice');
+      assert.deepEqual(first.claims.map((c) => [c.text, c.verdict]), [['\\det A = 0', 'holds']]);
     },
   );
 });
