@@ -6,6 +6,7 @@
  * resultant built from theirs; it is factored over Q and the root is chosen by interval arithmetic
  * on the certified enclosures, refined until exactly one root of one factor remains possible.
  */
+import { floorSqrt } from './intpoly';
 import { BudgetError, DomainError } from './errors';
 import { Rational } from './rational';
 import { Poly } from './poly';
@@ -397,9 +398,7 @@ function sameQuadraticField(x: AlgebraicNumber, y: AlgebraicNumber): [RadicalFor
 }
 
 function isqrtExact(n: bigint): bigint {
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
+  const x = floorSqrt(n);
   if (x * x !== n) throw new DomainError('not a perfect square');
   return x;
 }

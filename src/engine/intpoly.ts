@@ -284,15 +284,23 @@ export function bitLength(n: bigint): number {
 }
 
 /** ⌈√n⌉ for n ≥ 0 by Newton's method on bigints. */
-export function ceilSqrt(n: bigint): bigint {
+/**
+ * ⌊√n⌋ for n ≥ 0: Newton's iteration from a power of two above √n, so it works for any size (a
+ * double estimate would be Infinity above 2^1024). The one integer square root of the engine.
+ */
+export function floorSqrt(n: bigint): bigint {
   if (n < 0n) throw new RangeError('square root of a negative number');
   if (n < 2n) return n;
   let x = 1n << BigInt(Math.ceil(bitLength(n) / 2));
   for (;;) {
     const y = (x + n / x) >> 1n;
-    if (y >= x) break;
+    if (y >= x) return x;
     x = y;
   }
-  // x = ⌊√n⌋ now.
+}
+
+/** ⌈√n⌉ for n ≥ 0. */
+export function ceilSqrt(n: bigint): bigint {
+  const x = floorSqrt(n);
   return x * x === n ? x : x + 1n;
 }

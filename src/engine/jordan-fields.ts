@@ -4,6 +4,7 @@
  * above needs only field arithmetic plus coordinates in the power basis 1, α, …, α^{d−1}; from
  * the coordinates it derives the conjugation of a quadratic field and the trace K → Q itself.
  */
+import { floorSqrt } from './intpoly';
 import type { Field } from './field';
 import { DomainError } from './errors';
 import { Poly } from './poly';
@@ -85,17 +86,6 @@ export function quadraticDiscriminant(f: Poly): Rational {
   return f.coeff(1).mul(f.coeff(1)).sub(Rational.of(4).mul(f.coeff(0)));
 }
 
-function floorSqrt(n: bigint): bigint {
-  if (n < 2n) return n;
-  // Newton's iteration from a power of two above √n (works for any size; a double estimate
-  // would overflow above 2^1024).
-  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
-  for (;;) {
-    const y = (x + n / x) >> 1n;
-    if (y >= x) return x;
-    x = y;
-  }
-}
 
 function integerSqrt(n: bigint): bigint | undefined {
   if (n < 0n) return undefined;

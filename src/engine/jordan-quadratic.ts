@@ -4,6 +4,7 @@
  * every element is u + vδ with rational u, v; writing |D| = r²·m with m square-free, δ = r√m
  * (D > 0) or δ = i·r√m (D < 0), taking the embedding where δ has positive real or imaginary part.
  */
+import { floorSqrt } from './intpoly';
 import { DomainError } from './errors';
 import type { EigenField } from './jordan-fields';
 import { quadraticDiscriminant } from './jordan-fields';
@@ -30,22 +31,11 @@ export function squareFreeSplit(n: bigint): { square: bigint; radicand: bigint }
       square *= p;
     }
   }
-  const root = integerSqrt(rest);
+  const root = floorSqrt(rest);
   if (root * root === rest) return { square: square * root, radicand: 1n };
   return { square, radicand: rest };
 }
 
-function integerSqrt(n: bigint): bigint {
-  if (n < 2n) return n;
-  // Newton's iteration from a power of two above √n (works for any size; a double estimate
-  // would overflow above 2^1024).
-  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2));
-  for (;;) {
-    const y = (x + n / x) >> 1n;
-    if (y >= x) return x;
-    x = y;
-  }
-}
 
 /** √|D| of the field's quadratic as coef·√radicand. */
 export function discriminantSurd(K: EigenField<unknown>): QuadraticSurd {

@@ -3,6 +3,7 @@
  * numbers) and their printing, e.g. `1 + \sqrt{2}`, `-\frac{1}{2} + \frac{\sqrt{3}}{2} i`,
  * `510 + 100\sqrt{26}`, `2i`.
  */
+import { floorSqrt } from './intpoly';
 import { Rational } from './rational';
 
 /** a + b√d with d square-free, d ∉ {0, 1}; d < 0 denotes b√|d|·i. */
@@ -15,13 +16,6 @@ export interface RadicalForm {
 /** Trial division limit for square-free extraction; larger square factors are left under the root. */
 const TRIAL_LIMIT = 100000n;
 
-function isqrt(n: bigint): bigint {
-  if (n < 2n) return n;
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))));
-  while (x * x > n) x--;
-  while ((x + 1n) * (x + 1n) <= n) x++;
-  return x;
-}
 
 /**
  * n = k²·d with d square-free up to trial division (primes below 10^5, then a perfect-square
@@ -41,7 +35,7 @@ export function splitSquare(n: bigint): { k: bigint; d: bigint } {
     for (let i = 0; i + 1 < e; i += 2) k *= p;
     if (e % 2 === 1) d *= p;
   }
-  const r = isqrt(m);
+  const r = floorSqrt(m);
   if (r * r === m) k *= r;
   else d *= m;
   return { k, d: d * sign };
