@@ -177,13 +177,16 @@ export function rank(m: Matrix<unknown>, budget: Budget = Budget.unlimited()): n
  * every pivot entry equals the last pivot d and the result is the integer matrix divided by d.
  * Measured on 20×20 rank-17 integer matrices: ≈ 10× faster than Gauss–Jordan on Rational.
  */
-function rrefFractionFree(m: Matrix<unknown>, budget: Budget): { rref: Matrix<Rational>; pivots: number[] } {
-  const { work } = integerRows(m); // scaling rows does not change the reduced echelon form
-  const { a, rows, cols } = work;
+/**
+ * Fraction-free Gauss–Jordan in place on a row-major bigint array, pivoting in the first
+ * `pivotColumns` columns: after it, every pivot entry equals the last pivot `last`, each division
+ * by the previous pivot is exact (Bareiss), and the reduced form is the array divided by `last`.
+ */
+function gaussJordanFractionFree(a: bigint[], rows: number, cols: number, budget: Budget, pivotColumns = cols): { pivots: number[]; last: bigint } {
   let prev = 1n;
   let r = 0;
   const pivots: number[] = [];
-  for (let c = 0; c < cols && r < rows; c++) {
+  for (let c = 0; c < pivotColumns && r < rows; c++) {
     let p = r;
     while (p < rows && a[p * cols + c] === 0n) p++;
     if (p === rows) continue;
@@ -209,7 +212,15 @@ function rrefFractionFree(m: Matrix<unknown>, budget: Budget): { rref: Matrix<Ra
     pivots.push(c);
     r++;
   }
-  return { rref: Matrix.build(QQ, rows, cols, (i, j) => (i < r ? Rational.of(a[i * cols + j], prev) : Rational.ZERO)), pivots };
+  return { pivots, last: prev };
+}
+
+function rrefFractionFree(m: Matrix<unknown>, budget: Budget): { rref: Matrix<Rational>; pivots: number[] } {
+  const { work } = integerRows(m); // scaling rows does not change the reduced echelon form
+  const { a, rows, cols } = work;
+  const { pivots, last } = gaussJordanFractionFree(a, rows, cols, budget);
+  const r = pivots.length;
+  return { rref: Matrix.build(QQ, rows, cols, (i, j) => (i < r ? Rational.of(a[i * cols + j], last) : Rational.ZERO)), pivots };
 }
 
 /** The reduced row echelon form over a field (Z promoted to Q) and its pivot columns (zero-based). */
@@ -265,33 +276,10 @@ function inverseFractionFree(m: Matrix<unknown>, budget: Budget): Matrix<Rationa
       a[i * cols + n + j] = i === j ? 1n : 0n;
     }
   }
-  let prev = 1n;
-  for (let k = 0; k < n; k++) {
-    let p = k;
-    while (p < n && a[p * cols + k] === 0n) p++;
-    if (p === n) throw new SingularError(`the ${n}×${n} matrix is singular, so it has no inverse`);
-    if (p !== k) {
-      for (let j = 0; j < cols; j++) {
-        const t = a[p * cols + j];
-        a[p * cols + j] = a[k * cols + j];
-        a[k * cols + j] = t;
-      }
-    }
-    const pivot = a[k * cols + k];
-    budget.tick(n * cols);
-    for (let i = 0; i < n; i++) {
-      if (i === k) continue;
-      const factor = a[i * cols + k];
-      for (let j = 0; j < cols; j++) {
-        if (j === k) continue;
-        a[i * cols + j] = (pivot * a[i * cols + j] - factor * a[k * cols + j]) / prev;
-      }
-      a[i * cols + k] = 0n;
-    }
-    prev = pivot;
-  }
-  const det = a[(n - 1) * cols + (n - 1)]; // every diagonal entry of the left block is ±det B
-  return Matrix.build(QQ, n, n, (i, j) => Rational.of(a[i * cols + n + j] * rowScales[j], det));
+  const { pivots, last } = gaussJordanFractionFree(a, n, cols, budget, n);
+  if (pivots.length < n) throw new SingularError(`the ${n}×${n} matrix is singular, so it has no inverse`);
+  // Every diagonal entry of the left block is now ±det B (the last pivot).
+  return Matrix.build(QQ, n, n, (i, j) => Rational.of(a[i * cols + n + j] * rowScales[j], last));
 }
 
 /**
