@@ -9,7 +9,7 @@ import type { Definition, Environment } from './environment';
 import * as ops from './operations';
 import { walk } from './inspect';
 import * as spectral from './spectral';
-import { asRational, expScalar, int, num, SCALAR, symbol, trigScalar, type Scalar } from './scalar';
+import { asRational, chargeScalarsTo, expScalar, int, num, SCALAR, symbol, trigScalar, type Scalar } from './scalar';
 import { AlgebraicNumber } from '../engine/index';
 import { normalise } from './number';
 import { scalarValue, Undecidable, type Value } from './values';
@@ -35,6 +35,7 @@ const MAX_LITERAL_DIGITS = 5_000;
 /** Evaluates an expression to a value. */
 export function evaluate(expr: Expr, ctx: EvalContext): Value {
   ctx.budget.tick();
+  const previous = chargeScalarsTo(ctx.budget);
   try {
     return evaluateInner(expr, ctx);
   } catch (error) {
@@ -46,6 +47,8 @@ export function evaluate(expr: Expr, ctx: EvalContext): Value {
       throw new Undecidable('unchecked.division-by-zero', 'the expression divides by zero');
     }
     throw error;
+  } finally {
+    chargeScalarsTo(previous);
   }
 }
 
@@ -244,8 +247,19 @@ function evaluateApply(expr: ApplyExpr, ctx: EvalContext): Value {
     return ops.power(v, k, ctx.budget);
   };
   switch (expr.func) {
-    case 'det':
-      return wrapPower(scalarValue(ops.determinant(evaluateMatrix(single('det'), ctx, 'det'), ctx.budget)));
+    case 'det': {
+      // det e^{M} = e^{tr M} (Jacobi's formula; common practice): exact, and far cheaper than the
+      // determinant of the exponential's entries.
+      const arg = single('det');
+      const inner = arg.kind === 'group' ? arg.inner : arg;
+      if (inner.kind === 'apply' && inner.func === 'exp' && inner.args.length === 1 && !inner.nameSuperscript) {
+        const exponent = evaluate(inner.args[0], ctx);
+        if (exponent.kind === 'matrix' && exponent.value.rows === exponent.value.cols) {
+          return wrapPower(scalarValue(expScalar(ops.trace(exponent.value))));
+        }
+      }
+      return wrapPower(scalarValue(ops.determinant(evaluateMatrix(arg, ctx, 'det'), ctx.budget)));
+    }
     case 'abs': {
       const v = evaluate(single('|…|'), ctx);
       if (v.kind === 'matrix') return scalarValue(ops.determinant(v.value, ctx.budget));

@@ -7,7 +7,7 @@
  * exactly (e^{t} times an unrelated parameter, radicals times parameters) raise DomainError,
  * which becomes an `unchecked` verdict.
  */
-import { AlgebraicNumber, DomainError, ExpPolynomial, MPoly, Rational, RationalFunction, type Field } from '../engine/index';
+import { AlgebraicNumber, Budget, DomainError, ExpPolynomial, MPoly, Rational, RationalFunction, type Field } from '../engine/index';
 import { isAlgebraic, NUM, type Num } from './number';
 
 /** A scalar value. */
@@ -18,6 +18,20 @@ export type Scalar =
   | { readonly k: 'exp'; readonly v: ExpPolynomial<Num>; readonly t: string | null }
   /** c·t with an irrational or complex c (as in \cos\sqrt{3}t or e^{(-2 + \sqrt{2})t}). */
   | { readonly k: 'lin'; readonly c: Num; readonly t: string };
+
+/**
+ * The budget of the claim being decided. Operations on algebraic numbers, polynomials and
+ * exponentials can each take long (resultants in compositum fields), so every such operation
+ * charges it; the field interface has no place to pass it along.
+ */
+let activeBudget: Budget | undefined;
+
+/** Sets the budget charged by scalar operations; returns the previous one (to restore). */
+export function chargeScalarsTo(budget: Budget | undefined): Budget | undefined {
+  const previous = activeBudget;
+  activeBudget = budget;
+  return previous;
+}
 
 /** Wraps an exact number. */
 export function num(v: Num): Scalar {
@@ -149,7 +163,11 @@ function binary(
   onExp: (x: ExpPolynomial<Num>, y: ExpPolynomial<Num>) => ExpPolynomial<Num>,
   op?: 'add' | 'sub' | 'mul',
 ): Scalar {
-  if (a.k === 'num' && b.k === 'num') return num(onNum(a.v, b.v));
+  if (a.k === 'num' && b.k === 'num') {
+    if (!(a.v instanceof Rational) || !(b.v instanceof Rational)) activeBudget?.tick(256);
+    return num(onNum(a.v, b.v));
+  }
+  activeBudget?.tick(256);
   if (op && (a.k === 'lin' || b.k === 'lin' || (a.k === 'num' && isAlgebraic(a.v) && b.k === 'sym') || (b.k === 'num' && isAlgebraic(b.v) && a.k === 'sym'))) {
     const l = linearBinary(op, a, b);
     if (l) return l;
