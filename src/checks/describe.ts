@@ -57,11 +57,11 @@ function eigenLine(g: EigenGroup): string {
   return `${rootsText(g)} — algebraic multiplicity ${g.algebraic}${each}, geometric ${g.geometric}, Jordan blocks ${g.blocks.join(', ')}`;
 }
 
-function stabilityLine(f: MatrixFacts): string | undefined {
+function stabilityLine(f: MatrixFacts, label: string): string | undefined {
   const s = f.stability;
   if (!s) return undefined;
   const words = { 'asymptotically-stable': 'asymptotically stable', 'marginally-stable': 'marginally stable', unstable: 'unstable' }[s.verdict];
-  return `${s.notion === 'continuous' ? 'continuous time (ẋ = Ax)' : 'discrete time (x⁺ = Ax)'}: ${words} — ${s.reason}`;
+  return `${s.notion === 'continuous' ? `continuous time (ẋ = ${label}x)` : `discrete time (x⁺ = ${label}x)`}: ${words} — ${s.reason}`;
 }
 
 /** The rendered description of a matrix's facts. */
@@ -138,7 +138,7 @@ export function renderFacts(
   } else if (facts.notes.exponential) {
     md.push(`- e^{${label}t}: ${facts.notes.exponential}`);
   }
-  const stable = stabilityLine(facts);
+  const stable = stabilityLine(facts, label);
   if (stable) {
     md.push(`- stability, ${stable}`);
     sections.push({ title: 'Stability', text: stable });
