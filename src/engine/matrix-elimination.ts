@@ -33,6 +33,24 @@ interface Work<T> {
  * parity of the row swaps. Every entry after step k is a (k+1)-minor of the input, so each
  * `divExact` is exact.
  */
+
+/**
+ * Finds the first row at or below r with a non-zero entry in column c and swaps it into row r.
+ * Returns -1 when there is none, 1 when rows were swapped, 0 when row r already had it.
+ */
+function pivotToRow<T>(a: T[], rows: number, cols: number, r: number, c: number, isZero: (x: T) => boolean): -1 | 0 | 1 {
+  let p = r;
+  while (p < rows && isZero(a[p * cols + c])) p++;
+  if (p === rows) return -1;
+  if (p === r) return 0;
+  for (let j = 0; j < cols; j++) {
+    const t = a[p * cols + j];
+    a[p * cols + j] = a[r * cols + j];
+    a[r * cols + j] = t;
+  }
+  return 1;
+}
+
 function bareissEchelon<T>(d: ExactDivisionRing<T>, w: Work<T>, budget: Budget): { rank: number; pivots: number[]; swaps: number } {
   const { a, rows, cols } = w;
   let prev = d.one;
@@ -40,17 +58,9 @@ function bareissEchelon<T>(d: ExactDivisionRing<T>, w: Work<T>, budget: Budget):
   let swaps = 0;
   const pivots: number[] = [];
   for (let c = 0; c < cols && r < rows; c++) {
-    let p = r;
-    while (p < rows && d.isZero(a[p * cols + c])) p++;
-    if (p === rows) continue;
-    if (p !== r) {
-      for (let j = 0; j < cols; j++) {
-        const t = a[p * cols + j];
-        a[p * cols + j] = a[r * cols + j];
-        a[r * cols + j] = t;
-      }
-      swaps++;
-    }
+    const moved = pivotToRow(a, rows, cols, r, c, (x) => d.isZero(x));
+    if (moved < 0) continue;
+    if (moved > 0) swaps++;
     const pivot = a[r * cols + c];
     budget.tick((rows - r) * (cols - c));
     for (let i = r + 1; i < rows; i++) {
@@ -91,17 +101,9 @@ function gaussJordan<T>(f: Field<T>, w: Work<T>, budget: Budget, stopAtCols = w.
   let swaps = 0;
   let det = f.one;
   for (let c = 0; c < stopAtCols && r < rows; c++) {
-    let p = r;
-    while (p < rows && f.isZero(a[p * cols + c])) p++;
-    if (p === rows) continue;
-    if (p !== r) {
-      for (let j = 0; j < cols; j++) {
-        const t = a[p * cols + j];
-        a[p * cols + j] = a[r * cols + j];
-        a[r * cols + j] = t;
-      }
-      swaps++;
-    }
+    const moved = pivotToRow(a, rows, cols, r, c, (x) => f.isZero(x));
+    if (moved < 0) continue;
+    if (moved > 0) swaps++;
     const pivot = a[r * cols + c];
     det = f.mul(det, pivot);
     const pinv = f.inv(pivot);
@@ -187,16 +189,8 @@ function gaussJordanFractionFree(a: bigint[], rows: number, cols: number, budget
   let r = 0;
   const pivots: number[] = [];
   for (let c = 0; c < pivotColumns && r < rows; c++) {
-    let p = r;
-    while (p < rows && a[p * cols + c] === 0n) p++;
-    if (p === rows) continue;
-    if (p !== r) {
-      for (let j = 0; j < cols; j++) {
-        const t = a[p * cols + j];
-        a[p * cols + j] = a[r * cols + j];
-        a[r * cols + j] = t;
-      }
-    }
+    const moved = pivotToRow(a, rows, cols, r, c, (x) => x === 0n);
+    if (moved < 0) continue;
     const pivot = a[r * cols + c];
     budget.tick(rows * cols);
     for (let i = 0; i < rows; i++) {
